@@ -1,0 +1,13 @@
+import { defineConfig } from 'vitest/config';
+import react from '@vitejs/plugin-react';
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: { alias: { '@': new URL('./src', import.meta.url).pathname } },
+  worker: { format: 'es' },
+  build: { target: 'es2022', chunkSizeWarningLimit: 1600 },
+  test: {
+    environment: 'node',
+    include: ['test/unit/**/*.test.ts', 'test/components/**/*.test.tsx', 'src/**/*.test.{ts,tsx}'],
+  },
+});
