@@ -45,6 +45,8 @@ export const materialSchema = z
     conductivityWPerMK: propertySchema,
     densityKgPerM3: propertySchema,
     specificHeatJPerKgK: propertySchema,
+    /** Emissivity of the part's surface as it leaves the furnace; used to judge whether radiation matters in a stage that leaves it out. */
+    surfaceEmissivity: z.number().gt(0, 'surfaceEmissivity must be above 0').lte(1, 'surfaceEmissivity must be at most 1').optional(),
   })
   .strict();
 
