@@ -9,7 +9,7 @@ export const MAX_PLAN_BYTES = 2_000_000;
 export type PlanIssue = { path: string; message: string };
 export type PlanParseOutcome = { ok: true; plan: PlanK } | { ok: false; issues: PlanIssue[] };
 
-function pathText(path: readonly PropertyKey[]): string {
+export function pathText(path: readonly PropertyKey[]): string {
   return path.length === 0 ? '(plan)' : path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('').replace(/^\./, '');
 }
 
