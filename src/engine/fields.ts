@@ -32,4 +32,36 @@ export interface Grid1DField {
 }
 
 export type Field1D = UniformField | Series1DField | Grid1DField;
-export type Field = Field1D;
+
+/** One axis factor of a separable term, dimensionless: f(x) = offset + sum_n amplitudes[n] * X(eigenvalues[n] * x / lengthM). */
+export interface SeriesFactor {
+  offset: number;
+  eigenvalues: Float64Array;
+  amplitudes: Float64Array;
+}
+
+/**
+ * A sum of separable terms on a finite shape (constant properties, exact):
+ * T(x) = offsetK + sum_j terms[j].weightK * prod_d factors[d](x_d),
+ * axis d of geometry.finiteAxes, x_d from the centre; X = cos on linear axes, J0 on the radial axis.
+ * Carslaw and Jaeger, Conduction of Heat in Solids, 2nd ed., Sec. 1.15 (product solutions) (from memory).
+ */
+export interface ProductField {
+  kind: 'product';
+  axes: { geometry: 'slab' | 'cylinder'; lengthM: number }[];
+  offsetK: number;
+  terms: { weightK: number; factors: SeriesFactor[] }[];
+}
+
+/**
+ * A field sampled on a tensor grid over the symmetric part of a finite shape (axes as geometry.finiteAxes):
+ * node positions from the centre (0) to the surface (the half-length) per axis, multilinear between.
+ * temperaturesK[i0 + n0 * (i1 + n1 * i2)].
+ */
+export interface TensorGridField {
+  kind: 'tensor-grid';
+  nodesM: Float64Array[];
+  temperaturesK: Float64Array;
+}
+
+export type Field = Field1D | ProductField | TensorGridField;

@@ -8,6 +8,18 @@ export type SeriesGeometry = 'slab' | 'cylinder' | 'sphere';
 export interface ReportedPoint {
   id: PointId;
   label: string;
+  /** Finite shapes: position from the centre along each of geometry.finiteAxes, m. */
+  positionM?: number[];
+}
+
+/**
+ * One axis of a finite shape's symmetric part: 'radial' (0..r0, weight r) or 'linear' (0..half side).
+ * The solved region is the part between the centre and the faces; symmetry gives the rest.
+ */
+export interface FiniteAxis {
+  coordinate: 'radial' | 'linear';
+  name: 'r' | 'x' | 'y' | 'z';
+  halfLengthM: number;
 }
 
 export interface Geometry {
@@ -24,6 +36,8 @@ export interface Geometry {
   /** The 1-D problem the shape reduces to, or null for finite shapes. */
   oneD: { geometry: SeriesGeometry; lengthM: number } | null;
   points: ReportedPoint[];
+  /** Finite shapes only: the axes of the product solution and the multi-dimensional grid. */
+  finiteAxes?: FiniteAxis[];
 }
 
 const POINTS_1D = (centreLabel: string): ReportedPoint[] => [
@@ -57,21 +71,42 @@ export function geometryOf(shape: Shape): Geometry {
       const { radiusM: r, halfLengthM: L } = shape;
       const V = Math.PI * r * r * 2 * L;
       const A = 2 * Math.PI * r * 2 * L + 2 * Math.PI * r * r;
-      return { shape, volumeM3: V, cooledAreaM2: A, characteristicLengthM: V / A, seriesLengthM: Math.min(r, L), seriesLengthLabel: r <= L ? 'r0 (radius)' : 'L (half-length)', basis: 'part', oneD: null, points: [
-        { id: 'centre', label: 'centre' }, { id: 'face-x', label: 'side, mid-length' }, { id: 'face-z', label: 'end face, centre' }, { id: 'corner', label: 'rim (end-face edge)' }, { id: 'mean', label: 'volume mean' } ] };
+      const finiteAxes: FiniteAxis[] = [{ coordinate: 'radial', name: 'r', halfLengthM: r }, { coordinate: 'linear', name: 'z', halfLengthM: L }];
+      return { shape, volumeM3: V, cooledAreaM2: A, characteristicLengthM: V / A, seriesLengthM: Math.min(r, L), seriesLengthLabel: r <= L ? 'r0 (radius)' : 'L (half-length)', basis: 'part', oneD: null, finiteAxes, points: [
+        { id: 'centre', label: 'centre', positionM: [0, 0] },
+        { id: 'face-x', label: 'side, mid-length', positionM: [r, 0] },
+        { id: 'face-z', label: 'end face, centre', positionM: [0, L] },
+        { id: 'edge', label: 'rim (end-face edge)', positionM: [r, L] },
+        { id: 'mean', label: 'volume mean' } ] };
     }
     case 'bar': {
       const { halfWidthM: a, halfHeightM: b } = shape;
       // Per m of length: V = 4ab, As = 4(a + b).
-      return { shape, volumeM3: 4 * a * b, cooledAreaM2: 4 * (a + b), characteristicLengthM: (a * b) / (a + b), seriesLengthM: Math.min(a, b), seriesLengthLabel: 'smaller half-side', basis: 'per m of length', oneD: null, points: [
-        { id: 'centre', label: 'axis' }, { id: 'face-x', label: 'wide face, middle' }, { id: 'face-y', label: 'narrow face, middle' }, { id: 'corner', label: 'edge (corner of section)' }, { id: 'mean', label: 'volume mean' } ] };
+      const finiteAxes: FiniteAxis[] = [{ coordinate: 'linear', name: 'x', halfLengthM: a }, { coordinate: 'linear', name: 'y', halfLengthM: b }];
+      return { shape, volumeM3: 4 * a * b, cooledAreaM2: 4 * (a + b), characteristicLengthM: (a * b) / (a + b), seriesLengthM: Math.min(a, b), seriesLengthLabel: 'smaller half-side', basis: 'per m of length', oneD: null, finiteAxes, points: [
+        { id: 'centre', label: 'axis', positionM: [0, 0] },
+        { id: 'face-x', label: 'face ⟂ x (width 2a), middle', positionM: [a, 0] },
+        { id: 'face-y', label: 'face ⟂ y (height 2b), middle', positionM: [0, b] },
+        { id: 'edge', label: 'long edge', positionM: [a, b] },
+        { id: 'mean', label: 'volume mean' } ] };
     }
     case 'block': {
       const { halfLengthM: a, halfWidthM: b, halfHeightM: c } = shape;
       const V = 8 * a * b * c;
       const A = 8 * (a * b + b * c + a * c);
-      return { shape, volumeM3: V, cooledAreaM2: A, characteristicLengthM: V / A, seriesLengthM: Math.min(a, b, c), seriesLengthLabel: 'smallest half-side', basis: 'part', oneD: null, points: [
-        { id: 'centre', label: 'centre' }, { id: 'face-x', label: 'face ⟂ x, middle' }, { id: 'face-y', label: 'face ⟂ y, middle' }, { id: 'face-z', label: 'face ⟂ z, middle' }, { id: 'edge', label: 'edge, middle' }, { id: 'corner', label: 'corner' }, { id: 'mean', label: 'volume mean' } ] };
+      const finiteAxes: FiniteAxis[] = [{ coordinate: 'linear', name: 'x', halfLengthM: a }, { coordinate: 'linear', name: 'y', halfLengthM: b }, { coordinate: 'linear', name: 'z', halfLengthM: c }];
+      // The reported edge runs along the longest side (the two faces that meet there are the closest together).
+      const halves = [a, b, c];
+      const along = halves.indexOf(Math.max(a, b, c));
+      const edgeAt = halves.map((h, d) => (d === along ? 0 : h));
+      return { shape, volumeM3: V, cooledAreaM2: A, characteristicLengthM: V / A, seriesLengthM: Math.min(a, b, c), seriesLengthLabel: 'smallest half-side', basis: 'part', oneD: null, finiteAxes, points: [
+        { id: 'centre', label: 'centre', positionM: [0, 0, 0] },
+        { id: 'face-x', label: 'face ⟂ x, middle', positionM: [a, 0, 0] },
+        { id: 'face-y', label: 'face ⟂ y, middle', positionM: [0, b, 0] },
+        { id: 'face-z', label: 'face ⟂ z, middle', positionM: [0, 0, c] },
+        { id: 'edge', label: `edge along ${'xyz'[along]} (the longest side), middle`, positionM: edgeAt },
+        { id: 'corner', label: 'corner', positionM: [a, b, c] },
+        { id: 'mean', label: 'volume mean' } ] };
     }
   }
 }
