@@ -21,7 +21,8 @@ export interface PlanSheetMeta {
 export interface PlanDocument {
   main: PlanK;
   variants: PlanVariant[];
-  sheet: PlanSheetMeta;
+  /** Title block of the stage sheet; files always carry it, a new document may not have it yet. */
+  sheet?: PlanSheetMeta;
 }
 
 export const EMPTY_SHEET_META: PlanSheetMeta = { revision: '', preparedBy: '', checkedBy: '', date: '' };

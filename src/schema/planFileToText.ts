@@ -3,7 +3,7 @@
 import { toCelsiusPlan } from './planTemperatures';
 import { PLAN_FORMAT, type PlanK } from './planSchema';
 import { PLAN_FILE_VERSION } from './planFileSchema';
-import type { PlanDocument } from './planDocument';
+import { EMPTY_SHEET_META, type PlanDocument } from './planDocument';
 
 export type FileTemperatureUnit = 'degC' | 'K';
 
@@ -19,7 +19,7 @@ export function planFileToText(document: PlanDocument, unit: FileTemperatureUnit
     temperatureUnit: unit,
     main: bodyOf(document.main, unit),
     variants: document.variants.map((v) => ({ id: v.id, name: v.name, plan: bodyOf(v.plan, unit) })),
-    sheet: document.sheet,
+    sheet: document.sheet ?? EMPTY_SHEET_META,
   };
   return `${JSON.stringify(file, null, 2)}\n`;
 }
