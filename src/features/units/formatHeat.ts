@@ -11,7 +11,7 @@ const KILOJOULE_J = 1e3;
 
 /** J on the SI basis -> the number shown and its unit, on the US basis where the system is US. */
 export function heatInUnits(heatJ: number, basis: HeatBasis, system: UnitSystem): { value: number; symbol: string } {
-  if (system === 'US') {
+  if (system === 'us') {
     const joulePerShown = basis === 'part' ? JOULE_PER_BTU_IT : basis === 'per m² of cooled face' ? J_PER_M2_PER_BTU_PER_FT2 : J_PER_M_PER_BTU_PER_FT;
     return { value: heatJ / joulePerShown, symbol: 'Btu' };
   }

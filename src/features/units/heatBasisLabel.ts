@@ -6,9 +6,9 @@ import type { UnitSystem } from './unitSystem';
 export type HeatBasis = Geometry['basis'];
 
 const LABELS: Record<HeatBasis, Record<UnitSystem, string>> = {
-  part: { SI: 'per part', US: 'per part' },
-  'per m² of cooled face': { SI: 'per m² of cooled face', US: 'per ft² of cooled face' },
-  'per m of length': { SI: 'per m of length', US: 'per ft of length' },
+  part: { si: 'per part', us: 'per part' },
+  'per m² of cooled face': { si: 'per m² of cooled face', us: 'per ft² of cooled face' },
+  'per m of length': { si: 'per m of length', us: 'per ft of length' },
 };
 
 export function heatBasisLabel(basis: HeatBasis, system: UnitSystem): string {

@@ -23,7 +23,7 @@ export function normaliseUnitText(text: string): string {
 
 function acceptedUnits(kind: QuantityKind, system: UnitSystem): DisplayUnit[] {
   const q = QUANTITY_UNITS[kind];
-  const other: UnitSystem = system === 'SI' ? 'US' : 'SI';
+  const other: UnitSystem = system === 'si' ? 'us' : 'si';
   return [q.display[system], q.display[other], ...q.alsoAccepted];
 }
 

@@ -1,5 +1,5 @@
 // Every quantity the workbench shows, with the unit it is shown in per unit system, the units a form
-// accepts for it, and how many digits to show. Values inside are SI: K, m, W/(m²·K), W/(m·K), kg/m³,
+// accepts for it, and how many digits to show. Values inside are si: K, m, W/(m²·K), W/(m·K), kg/m³,
 // J/(kg·K), K/s, J, s. Temperature *differences* and rates convert without the scale offset.
 import type { UnitSystem } from './unitSystem';
 import {
@@ -71,58 +71,58 @@ const FAHRENHEIT: DisplayUnit = {
 const KELVIN = scaled('K', 1, ['kelvin']);
 
 export const QUANTITY_UNITS: Record<QuantityKind, QuantityUnits> = {
-  temperature: { name: 'Temperature', display: { SI: CELSIUS, US: FAHRENHEIT }, alsoAccepted: [KELVIN], digits: { kind: 'decimals', count: 1 } },
+  temperature: { name: 'Temperature', display: { si: CELSIUS, us: FAHRENHEIT }, alsoAccepted: [KELVIN], digits: { kind: 'decimals', count: 1 } },
   temperatureDifference: {
     name: 'Temperature difference',
-    display: { SI: scaled('K', 1, ['°C', 'degC', 'C']), US: scaled('°F', KELVIN_PER_FAHRENHEIT_DEGREE, ['degF', 'F']) },
+    display: { si: scaled('K', 1, ['°C', 'degC', 'C']), us: scaled('°F', KELVIN_PER_FAHRENHEIT_DEGREE, ['degF', 'F']) },
     alsoAccepted: [],
     digits: { kind: 'decimals', count: 1 },
   },
   length: {
     name: 'Length',
-    display: { SI: scaled('mm', 1e-3), US: scaled('in', METRE_PER_INCH, ['inch', '"']) },
+    display: { si: scaled('mm', 1e-3), us: scaled('in', METRE_PER_INCH, ['inch', '"']) },
     alsoAccepted: [scaled('m', 1), scaled('cm', 1e-2), scaled('ft', METRE_PER_FOOT)],
     digits: { kind: 'significant', count: 3 },
   },
   heatTransferCoefficient: {
     name: 'Heat transfer coefficient',
-    display: { SI: scaled('W/(m²·K)', 1), US: scaled('Btu/(h·ft²·°F)', W_PER_M2K_PER_BTU_PER_H_FT2_F) },
+    display: { si: scaled('W/(m²·K)', 1), us: scaled('Btu/(h·ft²·°F)', W_PER_M2K_PER_BTU_PER_H_FT2_F) },
     alsoAccepted: [scaled('kW/(m²·K)', 1e3)],
     digits: { kind: 'significant', count: 3 },
   },
   conductivity: {
     name: 'Thermal conductivity',
-    display: { SI: scaled('W/(m·K)', 1), US: scaled('Btu/(h·ft·°F)', W_PER_MK_PER_BTU_PER_H_FT_F) },
+    display: { si: scaled('W/(m·K)', 1), us: scaled('Btu/(h·ft·°F)', W_PER_MK_PER_BTU_PER_H_FT_F) },
     alsoAccepted: [],
     digits: { kind: 'significant', count: 3 },
   },
   density: {
     name: 'Density',
-    display: { SI: scaled('kg/m³', 1), US: scaled('lb/ft³', KG_PER_M3_PER_LB_PER_FT3) },
+    display: { si: scaled('kg/m³', 1), us: scaled('lb/ft³', KG_PER_M3_PER_LB_PER_FT3) },
     alsoAccepted: [],
     digits: { kind: 'significant', count: 4 },
   },
   specificHeat: {
     name: 'Specific heat',
-    display: { SI: scaled('J/(kg·K)', 1), US: scaled('Btu/(lb·°F)', J_PER_KGK_PER_BTU_PER_LB_F) },
+    display: { si: scaled('J/(kg·K)', 1), us: scaled('Btu/(lb·°F)', J_PER_KGK_PER_BTU_PER_LB_F) },
     alsoAccepted: [scaled('kJ/(kg·K)', 1e3)],
     digits: { kind: 'significant', count: 3 },
   },
   coolingRate: {
     name: 'Cooling rate',
-    display: { SI: scaled('K/s', 1, ['°C/s', 'degC/s']), US: scaled('°F/s', KELVIN_PER_FAHRENHEIT_DEGREE, ['degF/s', 'F/s']) },
+    display: { si: scaled('K/s', 1, ['°C/s', 'degC/s']), us: scaled('°F/s', KELVIN_PER_FAHRENHEIT_DEGREE, ['degF/s', 'F/s']) },
     alsoAccepted: [scaled('K/min', 1 / 60, ['°C/min']), scaled('°F/min', KELVIN_PER_FAHRENHEIT_DEGREE / 60, ['F/min'])],
     digits: { kind: 'significant', count: 3 },
   },
   heat: {
     name: 'Heat',
-    display: { SI: scaled('kJ', 1e3), US: scaled('Btu', JOULE_PER_BTU_IT, ['BTU']) },
+    display: { si: scaled('kJ', 1e3), us: scaled('Btu', JOULE_PER_BTU_IT, ['BTU']) },
     alsoAccepted: [scaled('J', 1), scaled('MJ', 1e6)],
     digits: { kind: 'significant', count: 3 },
   },
   duration: {
     name: 'Duration',
-    display: { SI: scaled('s', 1, ['sec']), US: scaled('s', 1, ['sec']) },
+    display: { si: scaled('s', 1, ['sec']), us: scaled('s', 1, ['sec']) },
     alsoAccepted: [scaled('min', 60), scaled('h', SECOND_PER_HOUR, ['hr'])],
     digits: { kind: 'significant', count: 3 },
   },

@@ -8,25 +8,25 @@ import { formatNumber } from '@/features/units/formatNumber';
 
 describe('formatQuantity', () => {
   it.each([
-    ['temperature', 1123.15, 'SI', '850.0 °C'],
-    ['temperature', 1123.15, 'US', '1562.0 °F'],
-    ['temperature', 273.15, 'US', '32.0 °F'],
-    ['temperatureDifference', 50, 'US', '90.0 °F'],
-    ['length', 0.0254, 'SI', '25.4 mm'],
-    ['length', 0.0254, 'US', '1 in'],
-    ['heatTransferCoefficient', 5.678263 * 200, 'US', '200 Btu/(h·ft²·°F)'],
-    ['conductivity', 45, 'SI', '45 W/(m·K)'],
-    ['density', 7850, 'US', '490.1 lb/ft³'], // 7850 / 16.01846 = 490.06
-    ['specificHeat', 460, 'US', '0.11 Btu/(lb·°F)'], // 460 / 4186.8 = 0.10987
-    ['coolingRate', 25, 'US', '45 °F/s'],
+    ['temperature', 1123.15, 'si', '850.0 °C'],
+    ['temperature', 1123.15, 'us', '1562.0 °F'],
+    ['temperature', 273.15, 'us', '32.0 °F'],
+    ['temperatureDifference', 50, 'us', '90.0 °F'],
+    ['length', 0.0254, 'si', '25.4 mm'],
+    ['length', 0.0254, 'us', '1 in'],
+    ['heatTransferCoefficient', 5.678263 * 200, 'us', '200 Btu/(h·ft²·°F)'],
+    ['conductivity', 45, 'si', '45 W/(m·K)'],
+    ['density', 7850, 'us', '490.1 lb/ft³'], // 7850 / 16.01846 = 490.06
+    ['specificHeat', 460, 'us', '0.11 Btu/(lb·°F)'], // 460 / 4186.8 = 0.10987
+    ['coolingRate', 25, 'us', '45 °F/s'],
   ] as const)('%s %d in %s -> %s', (kind, si, system, expected) => {
     expect(formatQuantity(kind, si, system)).toBe(expected);
   });
   it('bare leaves the unit off', () => {
-    expect(formatQuantity('temperature', 300, 'SI', { bare: true })).toBe('26.9');
+    expect(formatQuantity('temperature', 300, 'si', { bare: true })).toBe('26.9');
   });
   it('-0.0 is shown as 0.0', () => {
-    expect(formatQuantity('temperature', 273.15 - 1e-9, 'SI')).toBe('0.0 °C');
+    expect(formatQuantity('temperature', 273.15 - 1e-9, 'si')).toBe('0.0 °C');
   });
 });
 
@@ -54,14 +54,14 @@ describe('formatDuration', () => {
 
 describe('formatHeat on each basis', () => {
   it('per part: kJ / MJ in SI, Btu in US (1 Btu_IT = 1055.056 J, NIST SP 811 B.8)', () => {
-    expect(formatHeat(412_000, 'part', 'SI')).toBe('412 kJ per part');
-    expect(formatHeat(3_910_000, 'part', 'SI')).toBe('3.91 MJ per part');
-    expect(formatHeat(1055.056 * 250, 'part', 'US')).toBe('250 Btu per part');
+    expect(formatHeat(412_000, 'part', 'si')).toBe('412 kJ per part');
+    expect(formatHeat(3_910_000, 'part', 'si')).toBe('3.91 MJ per part');
+    expect(formatHeat(1055.056 * 250, 'part', 'us')).toBe('250 Btu per part');
   });
   it('per m² of face becomes per ft² in US (1 Btu/ft² = 1.135653E+04 J/m², NIST SP 811 B.8)', () => {
-    expect(formatHeat(11356.53 * 96.1, 'per m² of cooled face', 'US')).toBe('96.1 Btu per ft² of cooled face');
+    expect(formatHeat(11356.53 * 96.1, 'per m² of cooled face', 'us')).toBe('96.1 Btu per ft² of cooled face');
   });
   it('per m of length becomes per ft in US (1055.056 J/ft = 3461.5 J/m)', () => {
-    expect(formatHeat(3461.5 * 10, 'per m of length', 'US')).toBe('10 Btu per ft of length');
+    expect(formatHeat(3461.5 * 10, 'per m of length', 'us')).toBe('10 Btu per ft of length');
   });
 });
