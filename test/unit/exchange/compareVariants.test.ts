@@ -1,0 +1,38 @@
+// The comparison table's figures come from the results: stage durations, totals, ends, extremes, heat.
+import { describe, expect, it } from 'vitest';
+import { compareVariants } from '@/features/variants/compareVariants';
+import { airResult, bathResult } from './demoResult';
+
+describe('compareVariants', () => {
+  const table = compareVariants([
+    { id: 'main', name: 'Air only', result: airResult },
+    { id: 'v1', name: 'Air then bath', result: bathResult },
+    { id: 'v2', name: 'Not run yet', result: undefined },
+  ]);
+  const [air, bath, pending] = table.plans;
+
+  it('reads stage durations and methods per plan', () => {
+    expect(air.computed?.stages).toEqual([
+      { name: 'Transfer', durationS: 20, method: 'lumped' },
+      { name: 'Hold, "still" air', durationS: 1800, method: 'series' },
+    ]);
+    expect(bath.computed?.stages.map((s) => s.method)).toEqual(['lumped', 'finite-volume']);
+    expect(table.stageRowCount).toBe(2);
+  });
+
+  it('totals, end temperatures of the last stage, and the largest figures over the stages', () => {
+    expect(air.computed).toMatchObject({ totalDurationS: 1820, endCentreK: 873.15, endSurfaceK: 870, endMeanK: 872, maxSurfaceCoolingRateKPerS: 2.5, maxCentreSurfaceDifferenceK: 6, heatRemovedJ: 1_550_000, methods: ['lumped', 'series'] });
+    expect(bath.computed).toMatchObject({ totalDurationS: 115, endCentreK: 373.15, maxSurfaceCoolingRateKPerS: 42, maxCentreSurfaceDifferenceK: 310, heatRemovedJ: 3_250_000 });
+  });
+
+  it('a plan without a result is shown as pending, not as zeros', () => {
+    expect(pending.computed).toBeNull();
+  });
+
+  it('a failed stage is carried in words', () => {
+    const failed = { ...bathResult, stages: bathResult.stages.slice(0, 1), failure: { index: 1, name: 'Bath', code: 'target-unreachable', message: 'the centre cannot reach 20 °C in a 60 °C bath' } };
+    const [row] = compareVariants([{ id: 'x', name: 'x', result: failed }]).plans;
+    expect(row.computed?.failure).toBe('stage 2 (Bath): the centre cannot reach 20 °C in a 60 °C bath');
+    expect(row.computed?.stages).toHaveLength(1);
+  });
+});
