@@ -1,0 +1,47 @@
+// Writes the document and unit system to storage shortly after each change, and at once when
+// the page is hidden or unloaded, so that a reload loses nothing.
+import type { AppStore } from './createAppStore';
+import { writeSavedWorkbench } from './savedWorkbench';
+
+/** Quiet time after the last edit before writing. */
+export const AUTOSAVE_DELAY_MS = 300;
+
+export interface Autosave {
+  flush(): void;
+  stop(): void;
+  /** Message of the last failed write (storage full or blocked), else null. */
+  lastError(): string | null;
+}
+
+export function startAutosave(store: AppStore, storage: Pick<Storage, 'setItem'>, delayMs = AUTOSAVE_DELAY_MS): Autosave {
+  let timer: ReturnType<typeof setTimeout> | null = null;
+  let error: string | null = null;
+  const write = () => {
+    timer = null;
+    const { document, unitSystem } = store.getState();
+    try {
+      writeSavedWorkbench(storage, { document, unitSystem });
+      error = null;
+    } catch (e) {
+      error = `Autosave failed: ${(e as Error).message}`;
+    }
+  };
+  const unsubscribe = store.subscribe((s, prev) => {
+    if (s.document === prev.document && s.unitSystem === prev.unitSystem) return;
+    if (timer !== null) clearTimeout(timer);
+    timer = setTimeout(write, delayMs);
+  });
+  const flush = () => {
+    if (timer === null) return;
+    clearTimeout(timer);
+    write();
+  };
+  return {
+    flush,
+    stop() {
+      flush();
+      unsubscribe();
+    },
+    lastError: () => error,
+  };
+}
