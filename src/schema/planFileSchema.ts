@@ -9,7 +9,8 @@ import { z } from 'zod';
 import { PLAN_FORMAT } from './planSchema';
 
 export const PLAN_FILE_VERSION = 2;
-export const MAX_VARIANTS = 20;
+/** Main plan plus variants stay within the worker's 20 plans per run (src/worker/engineMessages.ts). */
+export const MAX_VARIANTS = 19;
 
 const text = (what: string, max: number) => z.string({ error: `${what} must be text` }).max(max, `${what} may be at most ${max} characters`);
 
