@@ -1,5 +1,6 @@
 // Still air: free convection plus radiation, e.g. a part cooling on a rack or during a transfer.
 import type { MediumEntry } from '../libraryEntrySchema';
+import { DEFER_CAUTION, HOT_PARTS_CAUTION } from '../cautions';
 
 export const stillAir: MediumEntry = {
   id: 'still-air',
@@ -15,8 +16,5 @@ export const stillAir: MediumEntry = {
     source: 'free convection of gases, Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., Table 1.1 (from memory); convection only, radiation is added separately',
   },
   radiationMatters: true,
-  cautions: [
-    'Parts cooling in air stay hot long after they stop glowing: mark them, fence the cooling area, and handle them only with suitable gloves and tongs.',
-    'Follow the site procedures for hot work and the protective equipment set by local codes and qualified people.',
-  ],
+  cautions: [HOT_PARTS_CAUTION.text, DEFER_CAUTION.text],
 };

@@ -1,5 +1,7 @@
 // Still (unagitated) water quench.
 import type { MediumEntry } from '../libraryEntrySchema';
+import { CRACKING_CAUTION, DEFER_CAUTION, STEAM_CAUTION } from '../cautions';
+import { illustrativeCurveLabel } from './illustrativeCurveLabel';
 
 export const stillWater: MediumEntry = {
   id: 'still-water',
@@ -17,8 +19,7 @@ export const stillWater: MediumEntry = {
   },
   radiationMatters: false,
   boilingCurve: {
-    label:
-      'Illustrative shape only, not measured data. Replace it with h derived from a probe cooling-curve test of your own bath (a test in the manner of ISO 9950 / ASTM D6200, written for oils; from memory).',
+    label: illustrativeCurveLabel('for example a probe test in the manner of ISO 9950 / ASTM D6200, which are written for oils; from memory'),
     drawnForBathC: 25,
     convectionBelowC: 105,
     filmAboveC: 600,
@@ -37,9 +38,5 @@ export const stillWater: MediumEntry = {
       [1200, 350],
     ],
   },
-  cautions: [
-    'Hot parts turn water to steam at once: steam and splashing burn. Lower parts steadily, keep the face away from the tank, and wear the face and body protection the site requires.',
-    'Water is a severe quench: high-hardenability steels, sharp corners and changes of section can crack or distort. Check the grade and the geometry with qualified people before choosing water.',
-    'Keep water and steam away from any oil tank or molten salt nearby.',
-  ],
+  cautions: [STEAM_CAUTION.text, CRACKING_CAUTION.text, 'Keep water and steam away from any oil tank or salt bath nearby.', DEFER_CAUTION.text],
 };
