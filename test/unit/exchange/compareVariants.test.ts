@@ -36,3 +36,16 @@ describe('compareVariants', () => {
     expect(row.computed?.stages).toHaveLength(1);
   });
 });
+
+describe('variantOverlaySeries', () => {
+  it('one series per variant and point, stages joined in time order, names tell them apart', async () => {
+    const { variantOverlaySeries } = await import('@/features/variants/variantOverlaySeries');
+    const series = variantOverlaySeries([
+      { name: 'Air then bath', result: bathResult },
+      { name: 'Pending', result: undefined },
+    ]);
+    expect(series.map((s) => s.name)).toEqual(['Air then bath · axis', 'Air then bath · surface']);
+    expect(series[0].timeS).toEqual([0, 10, 20, 20, 60, 115]);
+    expect(series[1].temperatureK).toEqual([1123.15, 1106, 1096, 1096, 420, 340]);
+  });
+});
