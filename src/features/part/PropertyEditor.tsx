@@ -34,11 +34,12 @@ export function PropertyEditor({ label, kind, value, system, onChange }: Propert
       <legend>{label}</legend>
       <div className="segmented" role="radiogroup" aria-label={`${label}: constant or table`}>
         <label>
-          <input type="radio" checked={typeof value === 'number'} onChange={() => typeof value !== 'number' && commit(value.table[0][1], `${label}.form`)} /> constant
+          <input type="radio" name={`${label}-form`} checked={typeof value === 'number'} onChange={() => typeof value !== 'number' && commit(value.table[0][1], `${label}.form`)} /> constant
         </label>
         <label>
           <input
             type="radio"
+            name={`${label}-form`}
             checked={typeof value !== 'number'}
             onChange={() => typeof value === 'number' && commit({ table: [[TABLE_FIRST_ROW_K, value], [TABLE_FIRST_ROW_K + NEW_ROW_STEP_K, value]] }, `${label}.form`)}
           />{' '}
