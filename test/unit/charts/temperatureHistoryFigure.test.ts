@@ -1,0 +1,55 @@
+// The whole-plan temperature figure from a hand-built result: what is drawn where, in which units.
+// Unit conversions themselves are checked against NIST SP 811 in test/unit/units.
+import { describe, expect, it } from 'vitest';
+import type { ScatterData, Shape, Annotations } from 'plotly.js';
+import { temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
+import { quenchedShaftResult as result } from '../../components/fixtures/quenchedShaftResult';
+
+const DISPLAY_TOL = 1e-9;
+const traces = (f: ReturnType<typeof temperatureHistoryFigure>) => f.data as Partial<ScatterData>[];
+
+describe('temperatureHistoryFigure', () => {
+  const targets = [{ stageIndex: 1, point: 'centre' as const, temperatureK: 150 + 273.15 }];
+  const figure = temperatureHistoryFigure(result, { system: 'si', targets, extraSeries: [{ name: 'variant: warmer oil', timeS: [0, 400], temperatureK: [1123.15, 500] }] });
+
+  it('draws one trace per reported point, then the target, then the extra series', () => {
+    expect(traces(figure).map((t) => t.name)).toEqual(['axis', 'surface', 'volume mean', 'stage targets', 'variant: warmer oil']);
+  });
+
+  it('puts time in minutes for an 802.5 s plan and temperature in °C', () => {
+    const axis = traces(figure)[0];
+    const x = axis.x as number[];
+    const y = axis.y as number[];
+    expect(x.length).toBe(3 * 41);
+    expect(Math.abs(x[x.length - 1] - 802.5 / 60)).toBeLessThan(DISPLAY_TOL);
+    expect(Math.abs(y[0] - 850)).toBeLessThan(DISPLAY_TOL);
+    expect((figure.layout.xaxis?.title as { text: string }).text).toBe('Time (min)');
+    expect((figure.layout.yaxis?.title as { text: string }).text).toBe('Temperature (°C)');
+  });
+
+  it('draws the target over its stage at its temperature', () => {
+    const target = traces(figure)[3];
+    expect(target.x).toEqual([20 / 60, 202.5 / 60]);
+    expect((target.y as number[]).map((v) => Number(v.toFixed(9)))).toEqual([150, 150]);
+    expect((target.text as string[])[0]).toBe('target: axis 150.0 °C (2 oil quench)');
+  });
+
+  it('marks the stage boundaries and names every stage', () => {
+    const lines = (figure.layout.shapes as Partial<Shape>[]).filter((s) => s.type === 'line').map((s) => s.x0);
+    expect(lines).toEqual([20 / 60, 202.5 / 60]);
+    expect((figure.layout.annotations as Partial<Annotations>[]).map((a) => a.text)).toEqual(['1 transfer in air', '2 oil quench', '3 air hold']);
+  });
+
+  it('shows °F on the axis and in the readout in US units (850 °C = 1562 °F, NIST SP 811 B.9)', () => {
+    const us = temperatureHistoryFigure(result, { system: 'us' });
+    const axis = traces(us)[0];
+    expect(Math.abs((axis.y as number[])[0] - 1562)).toBeLessThan(1e-9);
+    expect((axis.text as string[])[0]).toBe('axis: 1562.0 °F<br>0 s · 1 transfer in air');
+    expect((us.layout.yaxis?.title as { text: string }).text).toBe('Temperature (°F)');
+  });
+
+  it('tells traces apart by dash and marker, not colour alone', () => {
+    const styles = traces(figure).slice(0, 3).map((t) => `${t.line?.dash}/${t.marker?.symbol}`);
+    expect(new Set(styles).size).toBe(3);
+  });
+});
