@@ -16,7 +16,9 @@ const text = (what: string, max: number) => z.string({ error: `${what} must be t
 
 export const variantIdSchema = z
   .string({ error: 'id must be text' })
-  .regex(/^[A-Za-z0-9_-]{1,40}$/, 'id must be 1 to 40 letters, digits, "-" or "_"');
+  .regex(/^[A-Za-z0-9_-]{1,40}$/, 'id must be 1 to 40 letters, digits, "-" or "_"')
+  // Results are filed by plan id, and the main plan's id is "main" (src/state/connectEngine.ts).
+  .refine((id) => id !== 'main', 'id "main" is kept for the main plan');
 
 export const sheetMetaSchema = z
   .object({

@@ -4,5 +4,6 @@ import type { DocumentSlice } from './documentSlice';
 import type { PlanEditSlice } from './planEditSlice';
 import type { ResultsSlice } from './resultsSlice';
 import type { ViewSlice } from './viewSlice';
+import type { VariantsSlice } from './variantsSlice';
 
-export type AppState = DocumentSlice & PlanEditSlice & ResultsSlice & ViewSlice;
+export type AppState = DocumentSlice & PlanEditSlice & ResultsSlice & ViewSlice & VariantsSlice;

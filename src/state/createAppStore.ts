@@ -7,6 +7,7 @@ import { createPlanEditSlice } from './planEditSlice';
 import { createResultsSlice } from './resultsSlice';
 import type { UnitSystem } from '@/features/units/unitSystem';
 import { createViewSlice } from './viewSlice';
+import { createVariantsSlice } from './variantsSlice';
 
 export type AppStore = StoreApi<AppState>;
 
@@ -16,5 +17,6 @@ export function createAppStore(initial: { document: PlanDocument; unitSystem?: U
     ...createPlanEditSlice(...a),
     ...createResultsSlice(...a),
     ...createViewSlice(initial.unitSystem ?? 'si')(...a),
+    ...createVariantsSlice(...a),
   }));
 }

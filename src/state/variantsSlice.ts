@@ -6,9 +6,6 @@ import { EMPTY_SHEET_META, type PlanDocument, type PlanSheetMeta, type PlanVaria
 import { MAX_VARIANTS } from '@/schema/planFileSchema';
 import type { AppState } from './appState';
 
-/** The id the main plan's results are filed under (the worker's run request uses it too). */
-export const MAIN_PLAN_ID = 'main';
-
 export interface VariantsSlice {
   /** Copy the main plan (or another variant) into a new variant; returns its id, or null at the limit. */
   addVariant(fromId?: string): string | null;

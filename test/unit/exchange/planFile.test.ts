@@ -147,3 +147,11 @@ describe('bad files change nothing and say what is wrong', () => {
     expect(planFileFromValue('coolstage-plan').ok).toBe(false);
   });
 });
+
+describe('variant ids', () => {
+  it('"main" is kept for the main plan', () => {
+    const file = v2();
+    file.variants[0].id = 'main';
+    expect(issuesOf(JSON.stringify(file))).toEqual([{ path: 'variants[0].id', message: 'id "main" is kept for the main plan' }]);
+  });
+});
