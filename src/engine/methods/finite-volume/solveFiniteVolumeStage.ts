@@ -1,0 +1,347 @@
+// General 1-D finite-volume stage solver: plane wall (symmetric or insulated back), long cylinder, sphere.
+// Method: vertex-centred finite volumes (buildVolumeGrid), nodes clustered at the cooled surface, harmonic-mean face
+// conductivity, enthalpy form with k(T) and rho cp(T) (tabulateMaterial), Newton-linearised surface flux
+// (convection with constant or boiling-curve h plus radiation), TR-BDF2 in time with an embedded error estimate
+// and automatic step control (trBdf2Stepper).
+// Validity: any Bi, any start field of the shape (uniform, exact series, sampled grid), heating or cooling.
+// Convergence rule: the grid is sized from Bi and toleranceK / (temperature span) (sizeGrid); steps are accepted
+// when the filtered local error is below TIME_TOLERANCE_FRACTION x toleranceK.
+// Expected error: reported temperatures within toleranceK of the exact answer (checked against the exact series
+// in test/unit/finite-volume); energy balance to the Newton tolerance (relative error well below 1e-6).
+import type { StageOutcome, StageProblem, StageSolution } from '../stageProblem';
+import type { Field } from '../../fields';
+import type { PointId } from '@/schema/planSchema';
+import { buildVolumeGrid, gridOnNodes, areaExponentOf, type VolumeGrid } from './buildVolumeGrid';
+import { tabulateMaterial, evaluateMaterial } from './tabulateMaterial';
+import { createTrBdf2Stepper, type TrBdf2Stepper } from './trBdf2Stepper';
+import { createPointHistory, recordPoints, samplePoint } from './pointHistory';
+import { sizeGrid } from './sizeGrid';
+import { equilibriumTemperature } from './equilibriumTemperature';
+import { temperatureAt } from './sampleStartField';
+
+/** Share of the tolerance given to the local time error of one step (the rest to space and accumulation). Common practice. */
+const TIME_TOLERANCE_FRACTION = 0.1;
+/** Newton update below which a stage is converged, relative to the temperature span. */
+const NEWTON_TOLERANCE_RELATIVE = 1e-11;
+/** Step controller: safety factor and limits on the change of step, Hairer, Norsett and Wanner, Solving ODEs I, 2nd ed., Sec. II.4 (from memory). */
+const STEP_SAFETY = 0.9;
+const STEP_GROWTH_MAX = 5;
+const STEP_SHRINK_MIN = 0.2;
+/** A located crossing must put the point within this share of the tolerance of the target. */
+const LOCATE_TOLERANCE_FRACTION = 0.1;
+const MAX_LOCATE_ITERATIONS = 60;
+/** Bounded horizon for point targets: this many conduction-plus-surface time constants, and at most MAX_TARGET_TIME_S. */
+const HORIZON_TIME_CONSTANTS = 200;
+const MAX_TARGET_TIME_S = 1e9;
+const MAX_STEPS = 500_000;
+/** Margin of the property table beyond the temperatures the stage can reach, K. */
+const TABLE_MARGIN_K = 5;
+
+/** Test and benchmark hooks: a fixed grid or a fixed time step instead of the automatic ones. */
+export interface FiniteVolumeOverrides {
+  cellCount?: number;
+  stretch?: number;
+  fixedStepS?: number;
+}
+
+interface Probe {
+  id: PointId;
+  /** Mean over the volume, or linear interpolation between node j and j + 1 with weight w on j + 1. */
+  mean: boolean;
+  j: number;
+  w: number;
+}
+
+function probeAt(id: PointId, grid: VolumeGrid, xM: number): Probe {
+  const nodes = grid.nodesM;
+  const last = grid.nodeCount - 1;
+  if (xM <= 0) return { id, mean: false, j: 0, w: 0 };
+  if (xM >= grid.lengthM) return { id, mean: false, j: last, w: 0 };
+  let j = 0;
+  while (j < last - 1 && nodes[j + 1] <= xM) j++;
+  const w = (xM - nodes[j]) / (nodes[j + 1] - nodes[j]);
+  return { id, mean: false, j, w };
+}
+
+function probeValue(p: Probe, grid: VolumeGrid, t: Float64Array): number {
+  if (p.mean) {
+    let s = 0;
+    for (let i = 0; i < grid.nodeCount; i++) s += grid.volumes[i] * t[i];
+    return s / grid.totalVolume;
+  }
+  return p.w === 0 ? t[p.j] : (1 - p.w) * t[p.j] + p.w * t[p.j + 1];
+}
+
+/** dT/dt at the probe from the net inflow F and capacity C: dT_i/dt = F_i / (V_i C_i). */
+function probeSlope(p: Probe, grid: VolumeGrid, f: Float64Array, c: Float64Array): number {
+  if (p.mean) {
+    let s = 0;
+    for (let i = 0; i < grid.nodeCount; i++) s += f[i] / c[i];
+    return s / grid.totalVolume;
+  }
+  const a = f[p.j] / (grid.volumes[p.j] * c[p.j]);
+  return p.w === 0 ? a : (1 - p.w) * a + p.w * (f[p.j + 1] / (grid.volumes[p.j + 1] * c[p.j + 1]));
+}
+
+function storedEnergy(grid: VolumeGrid, e: Float64Array): number {
+  let s = 0;
+  for (let i = 0; i < grid.nodeCount; i++) s += grid.volumes[i] * e[i];
+  return s;
+}
+
+function fieldRange(field: Field, probeNodes: Float64Array): { min: number; max: number } {
+  if (field.kind === 'uniform') return { min: field.temperatureK, max: field.temperatureK };
+  const values = field.kind === 'grid-1d' ? field.temperaturesK : probeNodes;
+  let min = Infinity, max = -Infinity;
+  for (const v of values) {
+    if (v < min) min = v;
+    if (v > max) max = v;
+  }
+  return { min, max };
+}
+
+const kelvin = (t: number) => `${t.toFixed(2)} K`;
+
+export function solveFiniteVolumeStage(problem: StageProblem): StageOutcome {
+  return solveFiniteVolumeStageWith(problem, {});
+}
+
+export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: FiniteVolumeOverrides): StageOutcome {
+  const { geometry, material, boundary, start, end } = problem;
+  const oneD = geometry.oneD;
+  if (!oneD) return { ok: false, code: 'not-applicable', message: 'The finite-volume method here is one-dimensional: it solves plates, long cylinders and spheres, not finite shapes.' };
+  if (start.kind !== 'uniform' && start.kind !== 'grid-1d' && start.kind !== 'series-1d') {
+    return { ok: false, code: 'not-applicable', message: `The start field is a ${start.kind} field of a finite shape; this stage is one-dimensional.` };
+  }
+  if (start.kind !== 'uniform' && (start.geometry !== oneD.geometry || Math.abs(start.lengthM - oneD.lengthM) > 1e-12 * oneD.lengthM)) {
+    return { ok: false, code: 'not-applicable', message: 'The start field belongs to a different shape or size than this stage.' };
+  }
+  const lengthM = oneD.lengthM;
+  const toleranceK = problem.toleranceK > 0 ? problem.toleranceK : 0.01;
+  const target = end.kind === 'point-temperature' ? end : null;
+  if (target && target.point !== 'centre' && target.point !== 'surface' && target.point !== 'mean' && target.point !== 'depth') {
+    return { ok: false, code: 'not-applicable', message: `A ${oneD.geometry} has no point "${target.point}"; use centre, surface, mean or depth.` };
+  }
+  const targetDepthM = target?.point === 'depth' ? (target.depthM ?? problem.depthM) : undefined;
+  if (target?.point === 'depth' && targetDepthM === undefined) return { ok: false, code: 'not-applicable', message: 'The stage ends on the depth point but no depth is given.' };
+  const depthX = (d: number) => Math.min(lengthM, Math.max(0, lengthM - d));
+
+  // Temperature range the stage can visit: start field, medium, surroundings (maximum principle), target.
+  const mediumK = boundary.mediumK;
+  const surroundingsK = boundary.radiation ? boundary.radiation.surroundingsK : mediumK;
+  const equilibriumK = equilibriumTemperature(boundary);
+  const probeX = new Float64Array(65);
+  for (let i = 0; i < probeX.length; i++) probeX[i] = (lengthM * i) / (probeX.length - 1);
+  const probeT = start.kind === 'series-1d' ? probeX.map((x) => temperatureAt(start, x)) : probeX;
+  const range = fieldRange(start, probeT);
+  const reachLowK = Math.min(range.min, mediumK, surroundingsK);
+  const reachHighK = Math.max(range.max, mediumK, surroundingsK);
+  const spanK = Math.max(reachHighK - reachLowK, toleranceK);
+  const lowK = Math.min(reachLowK, target ? target.temperatureK : Infinity) - TABLE_MARGIN_K;
+  const highK = Math.max(reachHighK, target ? target.temperatureK : -Infinity) + TABLE_MARGIN_K;
+  const table = tabulateMaterial(material, lowK, highK);
+
+  // Biot number on the series length with the largest secant h over the range, k at its smallest.
+  let hMax = 0;
+  let kMin = Infinity;
+  for (let i = 0; i <= 16; i++) {
+    const t = reachLowK + ((reachHighK - reachLowK) * i) / 16;
+    kMin = Math.min(kMin, material.conductivity.at(t));
+    const dT = t - equilibriumK;
+    hMax = Math.max(hMax, Math.abs(dT) > 1e-9 ? boundary.fluxOut(t) / dT : boundary.fluxOutDerivative(t));
+  }
+  const biot = (hMax * lengthM) / kMin;
+  const sized = sizeGrid(biot, toleranceK / spanK);
+  const cellCount = overrides.cellCount ?? sized.cellCount;
+  const stretch = overrides.stretch ?? sized.stretch;
+  const pinned = [problem.depthM, targetDepthM].filter((d): d is number => d !== undefined).map(depthX);
+  const reuse = start.kind === 'grid-1d' && overrides.cellCount === undefined && start.nodesM.length >= cellCount + 1 && start.nodesM.length <= 2 * cellCount + 1;
+  const grid = reuse ? gridOnNodes(oneD.geometry, lengthM, start.nodesM.slice(), geometry.volumeM3) : buildVolumeGrid(oneD.geometry, lengthM, cellCount, stretch, pinned, geometry.volumeM3);
+  const n = grid.nodeCount;
+
+  const initialK = new Float64Array(n);
+  for (let i = 0; i < n; i++) initialK[i] = start.kind === 'uniform' ? start.temperatureK : temperatureAt(start, grid.nodesM[i]);
+
+  const stepper = createTrBdf2Stepper(grid, table, boundary, lowK, highK, NEWTON_TOLERANCE_RELATIVE * spanK);
+  if (!stepper.setState(initialK)) return { ok: false, code: 'not-applicable', message: 'The start field has temperatures that are not finite numbers.' };
+
+  const probes: Probe[] = [
+    { id: 'centre', mean: false, j: 0, w: 0 },
+    { id: 'surface', mean: false, j: n - 1, w: 0 },
+    { id: 'mean', mean: true, j: 0, w: 0 },
+  ];
+  if (problem.depthM !== undefined) probes.push(probeAt('depth', grid, depthX(problem.depthM)));
+  const targetProbe: Probe | null = !target
+    ? null
+    : target.point === 'depth'
+      ? probeAt('depth', grid, depthX(targetDepthM as number))
+      : (probes.find((p) => p.id === target.point) as Probe);
+
+  // Point targets: refuse what the maximum principle rules out before stepping.
+  if (target && targetProbe) {
+    const t0 = probeValue(targetProbe, grid, stepper.temperatureK);
+    const refusal = unreachableReason(target.temperatureK, t0, range, mediumK, surroundingsK, equilibriumK, !boundary.radiation || surroundingsK === mediumK);
+    if (refusal) return { ok: false, code: 'target-unreachable', message: refusal };
+  }
+
+  const energyStart = storedEnergy(grid, stepper.enthalpy);
+  const history = createPointHistory(probes.length, 256);
+  const rowValues = new Float64Array(probes.length);
+  const rowSlopes = new Float64Array(probes.length);
+  const record = (timeS: number) => {
+    for (let p = 0; p < probes.length; p++) {
+      rowValues[p] = probeValue(probes[p], grid, stepper.temperatureK);
+      rowSlopes[p] = probeSlope(probes[p], grid, stepper.inflow, stepper.capacity);
+    }
+    recordPoints(history, timeS, rowValues, rowSlopes);
+  };
+  record(0);
+
+  const capacityMid = material.volumetricHeatCapacity(0.5 * (reachLowK + reachHighK));
+  const kMid = material.conductivity.at(0.5 * (reachLowK + reachHighK));
+  const surfaceSpacing = grid.nodesM[n - 1] - grid.nodesM[n - 2];
+  const localTolK = TIME_TOLERANCE_FRACTION * toleranceK;
+  const durationS = end.kind === 'duration' ? end.seconds : Infinity;
+  const m = areaExponentOf(oneD.geometry);
+  const hEq = Math.max(boundary.fluxOutDerivative(equilibriumK), 1e-12);
+  const timeConstantS = (capacityMid * lengthM * lengthM) / kMid + (capacityMid * lengthM) / ((m + 1) * hEq);
+  const horizonS = Math.min(MAX_TARGET_TIME_S, HORIZON_TIME_CONSTANTS * timeConstantS);
+
+  let timeS = 0;
+  let stepS = overrides.fixedStepS ?? Math.min(0.01 * (capacityMid * surfaceSpacing * surfaceSpacing) / kMid, durationS);
+  let heatOut = 0;
+  let steps = 0;
+  let rejectedLast = false;
+  let targetSide = 0;
+  if (target && targetProbe) {
+    const d = probeValue(targetProbe, grid, stepper.temperatureK) - target.temperatureK;
+    targetSide = Math.sign(d);
+  }
+  let finished = target !== null && targetSide === 0; // already at the target: a stage of zero length
+
+  while (!finished) {
+    if (problem.signal?.aborted) return { ok: false, code: 'aborted', message: 'The calculation was stopped.' };
+    if (steps >= MAX_STEPS) return { ok: false, code: 'target-not-reached', message: `No end after ${MAX_STEPS} time steps (${timeS.toExponential(3)} s simulated).` };
+    let h = stepS;
+    const remaining = durationS - timeS;
+    if (h >= remaining || timeS + 1.05 * h >= durationS) h = remaining;
+    const attempt = stepper.attempt(h);
+    if (!attempt.ok) {
+      stepS = 0.25 * h;
+      rejectedLast = true;
+      if (stepS < 1e-14 * Math.max(1, timeS)) return { ok: false, code: 'target-not-reached', message: `The time step fell below ${stepS.toExponential(2)} s at ${timeS.toExponential(4)} s (${attempt.reason === 'newton' ? 'Newton did not converge' : 'capacity peak not resolved'}).` };
+      continue;
+    }
+    const ratio = attempt.errorK > 0 ? localTolK / attempt.errorK : Infinity;
+    if (overrides.fixedStepS === undefined && ratio < 1) {
+      stepS = h * Math.max(STEP_SHRINK_MIN, STEP_SAFETY * Math.cbrt(ratio));
+      rejectedLast = true;
+      continue;
+    }
+    if (target && targetProbe) {
+      const after = probeValue(targetProbe, grid, stepper.trialTemperatureK) - target.temperatureK;
+      if (Math.sign(after) !== targetSide) {
+        const before = probeValue(targetProbe, grid, stepper.temperatureK) - target.temperatureK;
+        const located = locateCrossing(stepper, grid, targetProbe, target.temperatureK, h, before, after, LOCATE_TOLERANCE_FRACTION * toleranceK);
+        if (located === null) return { ok: false, code: 'target-not-reached', message: `The crossing of ${kelvin(target.temperatureK)} near ${timeS.toExponential(4)} s could not be located.` };
+        h = located;
+        finished = true;
+      }
+    }
+    heatOut += stepper.trialHeatOut();
+    stepper.accept();
+    timeS += h;
+    steps++;
+    record(timeS);
+    if (overrides.fixedStepS === undefined) {
+      const grow = Math.min(STEP_GROWTH_MAX, STEP_SAFETY * Math.cbrt(ratio));
+      stepS = h * (rejectedLast ? Math.min(1, grow) : grow);
+    }
+    rejectedLast = false;
+    if (end.kind === 'duration' && timeS >= durationS) finished = true;
+    if (!finished && target) {
+      let furthest = 0;
+      const t = stepper.temperatureK;
+      for (let i = 0; i < n; i++) furthest = Math.max(furthest, Math.abs(t[i] - equilibriumK));
+      if (furthest <= toleranceK) return { ok: false, code: 'target-not-reached', message: `The ${target.point} never reaches ${kelvin(target.temperatureK)}: after ${timeS.toExponential(3)} s the whole part is within ${toleranceK} K of ${kelvin(equilibriumK)}, where it settles.` };
+      if (timeS > horizonS) return { ok: false, code: 'target-not-reached', message: `The ${target.point} did not reach ${kelvin(target.temperatureK)} within ${horizonS.toExponential(3)} s (${HORIZON_TIME_CONSTANTS} time constants of the part).` };
+    }
+  }
+
+  const sampleCount = Math.max(2, problem.sampleCount);
+  const sampleTimes = new Float64Array(sampleCount);
+  for (let i = 0; i < sampleCount; i++) sampleTimes[i] = (timeS * i) / (sampleCount - 1);
+  const temperaturesK: Partial<Record<PointId, Float64Array>> = {};
+  probes.forEach((p, i) => (temperaturesK[p.id] = samplePoint(history, i, sampleTimes)));
+
+  const energyEnd = storedEnergy(grid, stepper.enthalpy);
+  const stored = energyStart - energyEnd;
+  const energyRelativeError = Math.abs(stored) > 0 ? Math.abs(heatOut - stored) / Math.abs(stored) : Math.abs(heatOut) > 0 ? 1 : 0;
+  const solution: StageSolution = {
+    method: 'finite-volume',
+    durationS: timeS,
+    samples: { timeS: sampleTimes, temperaturesK },
+    endField: { kind: 'grid-1d', geometry: oneD.geometry, lengthM, nodesM: grid.nodesM.slice(), temperaturesK: stepper.temperatureK.slice() },
+    heatRemovedJ: heatOut * grid.basisScale,
+    energyRelativeError,
+    effort: { steps, cells: n },
+    notes: [],
+  };
+  return { ok: true, solution };
+}
+
+/**
+ * Why a point target cannot be met, or null. Maximum principle for the heat equation with a surface flux of
+ * the sign of (T - medium): no temperature leaves the range of the start field and the medium / surroundings
+ * temperatures, and the equilibrium temperature is approached only asymptotically.
+ * Protter and Weinberger, Maximum Principles in Differential Equations, 1967, Ch. 3 (from memory).
+ */
+function unreachableReason(targetK: number, pointStartK: number, range: { min: number; max: number }, mediumK: number, surroundingsK: number, equilibriumK: number, fluxSignFollowsEquilibrium: boolean): string | null {
+  const lo = Math.min(range.min, mediumK, surroundingsK);
+  const hi = Math.max(range.max, mediumK, surroundingsK);
+  if (targetK < lo || targetK > hi) {
+    return `The target ${kelvin(targetK)} lies outside ${kelvin(lo)} to ${kelvin(hi)}, the range spanned by the start field (${kelvin(range.min)} to ${kelvin(range.max)}) and the medium (${kelvin(mediumK)}${surroundingsK !== mediumK ? `, surroundings ${kelvin(surroundingsK)}` : ''}); no temperature in the part can leave that range.`;
+  }
+  if (fluxSignFollowsEquilibrium) {
+    const wholeFieldAbove = range.min >= equilibriumK;
+    const wholeFieldBelow = range.max <= equilibriumK;
+    if ((wholeFieldAbove && targetK <= equilibriumK && pointStartK > targetK) || (wholeFieldBelow && targetK >= equilibriumK && pointStartK < targetK)) {
+      return `The target ${kelvin(targetK)} is ${targetK === equilibriumK ? 'equal to' : 'beyond'} the medium temperature ${kelvin(equilibriumK)}, which the part only approaches and never passes.`;
+    }
+  }
+  return null;
+}
+
+/**
+ * Shortens the step that crossed the target until the point sits on it: Illinois variant of regula falsi on the
+ * step length, each trial a full TR-BDF2 step from the accepted state.
+ * Dowell and Jarratt, A modified regula falsi method for computing the root of an equation, BIT 11 (1971) (from memory).
+ * Leaves the stepper's trial state at the located step and returns its length, or null.
+ */
+function locateCrossing(stepper: TrBdf2Stepper, grid: VolumeGrid, probe: Probe, targetK: number, stepS: number, before: number, after: number, tolK: number): number | null {
+  let a = 0, fa = before, b = stepS, fb = after;
+  let side = 0;
+  let last = stepS;
+  if (Math.abs(after) <= tolK) return stepS;
+  for (let i = 0; i < MAX_LOCATE_ITERATIONS; i++) {
+    const s = (a * fb - b * fa) / (fb - fa);
+    const trial = s > a && s < b ? s : 0.5 * (a + b);
+    const r = stepper.attempt(trial);
+    if (!r.ok) return null;
+    last = trial;
+    const g = probeValue(probe, grid, stepper.trialTemperatureK) - targetK;
+    if (Math.abs(g) <= tolK) return last;
+    if (Math.sign(g) === Math.sign(fb)) {
+      b = trial;
+      fb = g;
+      if (side === 1) fa *= 0.5;
+      side = 1;
+    } else {
+      a = trial;
+      fa = g;
+      if (side === -1) fb *= 0.5;
+      side = -1;
+    }
+  }
+  return null;
+}

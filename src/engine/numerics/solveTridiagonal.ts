@@ -1,0 +1,27 @@
+// Thomas algorithm for a tridiagonal system, in place, no allocation.
+// Press et al., Numerical Recipes, 3rd ed., Sec. 2.4 (tridag) (from memory).
+// Valid without pivoting for diagonally dominant matrices (the implicit conduction matrices here);
+// cost 8n flops, error at the level of the matrix condition number times machine precision.
+
+/**
+ * Solves lower[i] x[i-1] + diag[i] x[i] + upper[i] x[i+1] = rhs[i], i = 0..n-1
+ * (lower[0] and upper[n-1] unused). The solution is written to `x`; `work` (length n) is scratch.
+ */
+export function solveTridiagonal(
+  n: number,
+  lower: Float64Array,
+  diag: Float64Array,
+  upper: Float64Array,
+  rhs: Float64Array,
+  x: Float64Array,
+  work: Float64Array,
+): void {
+  let beta = diag[0];
+  x[0] = rhs[0] / beta;
+  for (let i = 1; i < n; i++) {
+    work[i] = upper[i - 1] / beta;
+    beta = diag[i] - lower[i] * work[i];
+    x[i] = (rhs[i] - lower[i] * x[i - 1]) / beta;
+  }
+  for (let i = n - 2; i >= 0; i--) x[i] -= work[i + 1] * x[i + 1];
+}
