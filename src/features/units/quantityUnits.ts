@@ -76,7 +76,8 @@ export const QUANTITY_UNITS: Record<QuantityKind, QuantityUnits> = {
     name: 'Temperature difference',
     display: { si: scaled('K', 1, ['°C', 'degC', 'C']), us: scaled('°F', KELVIN_PER_FAHRENHEIT_DEGREE, ['degF', 'F']) },
     alsoAccepted: [],
-    digits: { kind: 'decimals', count: 1 },
+    // Significant digits: differences run from a cross-check's 0.006 K to a 400 K centre-surface spread.
+    digits: { kind: 'significant', count: 3 },
   },
   length: {
     name: 'Length',
