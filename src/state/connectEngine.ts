@@ -10,7 +10,7 @@ export function plansOfDocument(document: PlanDocument) {
   return [{ id: MAIN_PLAN_ID, plan: document.main }, ...document.variants.map((v) => ({ id: v.id, plan: v.plan }))];
 }
 
-export function connectEngine(store: AppStore, createWorker: () => WorkerLike): { client: EngineClient; disconnect(): void } {
+export function connectEngine(store: AppStore, createWorker: () => WorkerLike): { client: EngineClient; recompute(): void; disconnect(): void } {
   const client = createEngineClient(createWorker, {
     onResults: (results, info) => store.getState().receiveResults(results, info),
     onProgress: (fraction) => store.getState().setProgress(fraction),
@@ -23,6 +23,7 @@ export function connectEngine(store: AppStore, createWorker: () => WorkerLike): 
   });
   return {
     client,
+    recompute: () => request(store.getState().document),
     disconnect() {
       unsubscribe();
       client.dispose();

@@ -1,7 +1,8 @@
 // One material property: a constant, or a table of (temperature, value) rows.
 // Each edit is checked with the plan's propertySchema (rows must rise in temperature).
 import { propertySchema, type PropertyInput } from '@/schema/planSchema';
-import type { QuantityKind } from '@/features/units/quantityUnits';
+import { displayUnit, type QuantityKind } from '@/features/units/quantityUnits';
+import { formatQuantity } from '@/features/units/formatQuantity';
 import type { UnitSystem } from '@/features/units/unitSystem';
 import { QuantityField } from './QuantityField';
 import { validateEdit } from './validateEdit';
@@ -49,11 +50,18 @@ export function PropertyEditor({ label, kind, value, system, onChange }: Propert
       {typeof value === 'number' ? (
         <QuantityField label={label} kind={kind} valueSI={value} system={system} check={positive} onCommit={(v) => commit(v, `${label}.constant`)} />
       ) : (
+        <details>
+          <summary>
+            {value.table.length} rows, {formatQuantity(kind, Math.min(...value.table.map((r) => r[1])), system)} to {formatQuantity(kind, Math.max(...value.table.map((r) => r[1])), system)} over{' '}
+            {formatQuantity('temperature', value.table[0][0], system)} to {formatQuantity('temperature', value.table[value.table.length - 1][0], system)}
+          </summary>
         <table className="rows-table">
           <thead>
             <tr>
-              <th scope="col">Temperature</th>
-              <th scope="col">{label}</th>
+              <th scope="col">Temperature ({displayUnit('temperature', system).symbol})</th>
+              <th scope="col">
+                {label} ({displayUnit(kind, system).symbol})
+              </th>
               <th scope="col">
                 <span className="sr-only">Remove</span>
               </th>
@@ -107,6 +115,7 @@ export function PropertyEditor({ label, kind, value, system, onChange }: Propert
             </tr>
           </tfoot>
         </table>
+        </details>
       )}
     </fieldset>
   );

@@ -4,6 +4,7 @@ import type { HeatTransfer } from '@/schema/planSchema';
 import type { BoilingCurve } from '@/library/libraryEntrySchema';
 import { KELVIN_OFFSET } from '@/schema/planTemperatures';
 import type { UnitSystem } from '@/features/units/unitSystem';
+import { displayUnit } from '@/features/units/quantityUnits';
 import { QuantityField } from '@/features/part/QuantityField';
 
 /** A table started from a constant h spans these surface temperatures (kelvin). */
@@ -58,8 +59,8 @@ export function HeatTransferEditor({ heatTransfer, boilingCurve, system, onChang
             <caption>h by surface temperature</caption>
             <thead>
               <tr>
-                <th scope="col">Surface temperature</th>
-                <th scope="col">h</th>
+                <th scope="col">Surface temperature ({displayUnit('temperature', system).symbol})</th>
+                <th scope="col">h ({displayUnit('heatTransferCoefficient', system).symbol})</th>
                 <th scope="col">
                   <span className="sr-only">Remove</span>
                 </th>

@@ -1,0 +1,37 @@
+// Start-up outside React: the saved workbench (or the demo), the store, the autosave and the
+// engine worker. Returns what the shell needs and a notice if the saved state could not be used.
+import { createAppStore, type AppStore } from '@/state/createAppStore';
+import { readSavedWorkbench } from '@/state/savedWorkbench';
+import { startAutosave, type Autosave } from '@/state/startAutosave';
+import { connectEngine } from '@/state/connectEngine';
+import type { EngineClient, WorkerLike } from '@/worker/createEngineClient';
+import { demoDocument } from './demoDocument';
+
+export interface Workbench {
+  store: AppStore;
+  autosave: Autosave;
+  engine: EngineClient;
+  /** Run the engine again on the current document (after Stop or an error). */
+  recompute(): void;
+  /** Said once at start when the saved state was damaged or unreadable. */
+  startNotice: string | null;
+  stop(): void;
+}
+
+export function startWorkbench(storage: Storage, createWorker: () => WorkerLike): Workbench {
+  const loaded = readSavedWorkbench(storage);
+  const store = createAppStore({ document: loaded.document ?? demoDocument(), unitSystem: loaded.unitSystem });
+  const autosave = startAutosave(store, storage);
+  const { client, recompute, disconnect } = connectEngine(store, createWorker);
+  return {
+    store,
+    autosave,
+    engine: client,
+    recompute,
+    startNotice: loaded.notice,
+    stop() {
+      autosave.stop();
+      disconnect();
+    },
+  };
+}
