@@ -5,21 +5,17 @@ import type { HeatTransfer, Material, Medium } from '@/schema/planSchema';
 import { KELVIN_OFFSET } from '@/schema/planTemperatures';
 import type { MaterialEntry, MediumEntry } from './libraryEntrySchema';
 
-/** The plan schema caps a material source at this many characters. */
-const PLAN_SOURCE_MAX_CHARS = 400;
-
 /** Round away float noise of the degC -> K shift (e.g. 20 + 273.15). */
 const tidy = (x: number) => Number(x.toPrecision(12));
 const toKelvin = (celsius: number) => tidy(celsius + KELVIN_OFFSET);
 
 const rowsToKelvin = (rows: ReadonlyArray<readonly [number, number]>): [number, number][] => rows.map(([c, v]) => [toKelvin(c), v]);
 
-const clip = (s: string, max: number) => (s.length <= max ? s : `${s.slice(0, max - 1)}…`);
-
 export function materialFromLibrary(entry: MaterialEntry): Material {
   return {
     name: entry.name,
-    source: clip(entry.source, PLAN_SOURCE_MAX_CHARS),
+    // The entry schema caps a source at the plan's 400 characters, so it fits as it is.
+    source: entry.source,
     libraryId: entry.id,
     conductivityWPerMK: { table: rowsToKelvin(entry.conductivityWPerMK) },
     densityKgPerM3: { table: rowsToKelvin(entry.densityKgPerM3) },

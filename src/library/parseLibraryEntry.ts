@@ -6,13 +6,14 @@ import { materialEntrySchema, mediumEntrySchema, type MaterialEntry, type Medium
 export type LibraryEntryIssue = { path: string; message: string };
 export type LibraryEntryOutcome<E> = { ok: true; entry: E } | { ok: false; issues: LibraryEntryIssue[] };
 
-function pathText(path: readonly PropertyKey[]): string {
-  return path.length === 0 ? '(entry)' : path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('').replace(/^\./, '');
+/** A zod issue path as text, e.g. "emissivity.suggested" or "conductivityWPerMK[1][0]"; `root` names the empty path. */
+export function issuePath(path: readonly PropertyKey[], root: string): string {
+  return path.length === 0 ? root : path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('').replace(/^\./, '');
 }
 
 function parseWith<E>(schema: z.ZodType<E>, data: unknown, reservedIds: ReadonlySet<string>): LibraryEntryOutcome<E> {
   const parsed = schema.safeParse(data);
-  if (!parsed.success) return { ok: false, issues: parsed.error.issues.map((i) => ({ path: pathText(i.path), message: i.message })) };
+  if (!parsed.success) return { ok: false, issues: parsed.error.issues.map((i) => ({ path: issuePath(i.path, '(entry)'), message: i.message })) };
   const id = (parsed.data as { id: string }).id;
   if (reservedIds.has(id)) return { ok: false, issues: [{ path: 'id', message: `id "${id}" is already taken; choose another` }] };
   return { ok: true, entry: parsed.data };
