@@ -2,6 +2,7 @@
 // the header. Every number is read from the PlanResult; only the temperature scale is changed.
 import type { PlanResult, StageResult } from '@/engine/plan/planResult';
 import type { PointId } from '@/schema/planSchema';
+import { safeFileName } from './safeFileName';
 import { KELVIN_AT_ZERO_CELSIUS, FAHRENHEIT_AT_ZERO_CELSIUS, KELVIN_PER_FAHRENHEIT_DEGREE } from '@/features/units/usCustomaryFactors';
 
 export type CsvTemperatureUnit = 'degC' | 'degF' | 'K';
@@ -52,6 +53,5 @@ export function planResultToCsv(result: PlanResult, options: CsvOptions): string
 
 /** A file name for the export: plan name made safe, the stage when there is one. */
 export function csvFileName(result: PlanResult, stageIndex?: number): string {
-  const base = result.planName.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '') || 'plan';
-  return stageIndex === undefined ? `${base}.csv` : `${base}-stage-${stageIndex + 1}.csv`;
+  return safeFileName(stageIndex === undefined ? result.planName : `${result.planName}-stage-${stageIndex + 1}`, 'csv');
 }

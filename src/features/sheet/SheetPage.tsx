@@ -4,10 +4,8 @@ import { useEffect, useMemo, useState } from 'react';
 import { useAppStore } from '@/state/useAppStore';
 import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { EMPTY_SHEET_META, type PlanSheetMeta } from '@/schema/planDocument';
-import { temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
-import { planChartTargets } from '@/features/charts/planChartTargets';
 import { chartToSvgText } from '@/features/charts/chartToImage';
-import { variantOverlaySeries } from '@/features/variants/variantOverlaySeries';
+import { planOverlayFigure } from '@/features/variants/planOverlayFigure';
 import { StageSheet } from './StageSheet';
 import { sheetEntryCautions } from './sheetEntryCautions';
 
@@ -36,11 +34,7 @@ export function SheetPage({ onBack }: { onBack: () => void }) {
   const [chart, setChart] = useState<{ svg: string; for: unknown } | null>(null);
   const main = results[MAIN_PLAN_ID];
 
-  const figure = useMemo(() => {
-    if (!main) return null;
-    const extraSeries = variantOverlaySeries(document.variants.map((v) => ({ name: v.name, result: results[v.id] })));
-    return temperatureHistoryFigure(main, { system: unitSystem, targets: planChartTargets(document.main), extraSeries });
-  }, [main, results, document, unitSystem]);
+  const figure = useMemo(() => planOverlayFigure(document, results, unitSystem), [results, document, unitSystem]);
 
   useEffect(() => {
     let current = true;

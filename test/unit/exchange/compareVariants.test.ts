@@ -49,3 +49,21 @@ describe('variantOverlaySeries', () => {
     expect(series[1].temperatureK).toEqual([1123.15, 1106, 1096, 1096, 420, 340]);
   });
 });
+
+describe('swapStageMedium', () => {
+  it('puts a library liquid with its boiling curve into one stage only', async () => {
+    const { swapStageMedium } = await import('@/features/variants/swapStageMedium');
+    const { BUILT_IN_MEDIA } = await import('@/library/builtInLibrary');
+    const { demoPlanK } = await import('./demoDocument');
+    const liquid = BUILT_IN_MEDIA.find((m) => m.boilingCurve);
+    if (!liquid) throw new Error('the library has no medium with a boiling curve');
+    const out = swapStageMedium(demoPlanK, 1, liquid);
+    if (!out.ok) throw new Error(out.message);
+    expect(out.plan.stages[1].medium.libraryId).toBe(liquid.id);
+    expect(out.plan.stages[1].medium.heatTransfer.kind).toBe('surface-table');
+    // Library tables are in degC; the plan holds kelvin (+273.15, BIPM SI Brochure 9th ed.).
+    const firstRow = out.plan.stages[1].medium.heatTransfer.kind === 'surface-table' ? out.plan.stages[1].medium.heatTransfer.rows[0] : null;
+    expect(firstRow?.[0]).toBeCloseTo(liquid.boilingCurve!.hWPerM2KBySurfaceC[0][0] + 273.15, 9);
+    expect(out.plan.stages[0]).toEqual(demoPlanK.stages[0]);
+  });
+});
