@@ -34,7 +34,7 @@ export const aluminaCeramic: MaterialEntry = {
     min: 0.4,
     max: 0.8,
     suggested: 0.7,
-    source: 'falls with temperature, about 0.7 near 600 K and about 0.4-0.55 above 1000 K; Incropera et al., 6th ed., Table A.11, aluminium oxide (from memory)',
+    source: 'falls with temperature, about 0.7 near 600 K and about 0.4-0.55 above 1000 K; Incropera et al., 6th ed., Table A.12, aluminium oxide (from memory)',
   },
   notes: ['Porous or lower-purity aluminas (for example 96 %) conduct noticeably less; use their own data.'],
   cautions: ['Ceramics can crack or burst under fast cooling; follow the supplier\'s limits on cooling rate.'],

@@ -46,7 +46,7 @@ export const leanMeatProduct: MaterialEntry = {
     min: 0.85,
     max: 0.95,
     suggested: 0.9,
-    source: 'moist surfaces are close to water, about 0.95; common practice, see Incropera et al., 6th ed., Table A.11 (from memory)',
+    source: 'moist surfaces are close to water, about 0.95; common practice, see Incropera et al., 6th ed., Table A.12, nonmetallic substances (from memory)',
   },
   notes: [
     'Composition is an invented demo value; use the composition of your product, or measured properties.',

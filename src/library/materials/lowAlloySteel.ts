@@ -7,7 +7,7 @@ export const lowAlloySteel: MaterialEntry = {
   description:
     'A through-hardening chromium-molybdenum steel, 20-1200 degC. Alloying lowers the conductivity below that of plain carbon steel at room temperature; in austenite the two come close together.',
   source:
-    'ASM Handbook, Vol. 1, Properties and Selection: Irons, Steels, and High-Performance Alloys, 1990, room-temperature values (from memory); trend with temperature after BISRA, Physical Constants of Some Commercial Steels at Elevated Temperatures, Butterworths, 1953, low-alloy steels (from memory, rounded, approximate)',
+    'ASM Handbook, Vol. 1, Properties and Selection: Irons, Steels, and High-Performance Alloys, 1990, room-temperature k, rho, cp (from memory); higher rows are an approximate trend that meets the carbon-steel values in austenite, as the commercial steels of BISRA, Physical Constants of Some Commercial Steels at Elevated Temperatures, 1953, do (from memory)',
   // [degC, W/m K]
   conductivityWPerMK: [
     [20, 42.6],
@@ -37,7 +37,8 @@ export const lowAlloySteel: MaterialEntry = {
     [1200, 7410],
   ],
   // [degC, J/kg K]: effective specific heat; the peak near 730-790 degC carries the latent heat of
-  // the change to austenite and the magnetic change (from memory, rounded).
+  // the change to austenite and the magnetic change (approximate: shaped like the carbon-steel peak,
+  // moved to this grade's Ac1-Ac3 range, from memory).
   specificHeatJPerKgK: [
     [20, 460],
     [100, 477],

@@ -27,7 +27,7 @@ export const sodaLimeGlass: MaterialEntry = {
     min: 0.85,
     max: 0.95,
     suggested: 0.9,
-    source: 'glass surfaces are nearly black in the thermal infrared; common practice, see Incropera et al., 6th ed., Table A.11 (from memory)',
+    source: 'glass surfaces are nearly black in the thermal infrared; common practice, see Incropera et al., 6th ed., Table A.12, nonmetallic substances (from memory)',
   },
   notes: [
     'Only one temperature was tabulated in the source, so k, rho and cp are held constant. In reality k and especially cp rise with temperature; replace with measured data for work near the annealing or softening range.',
