@@ -1,0 +1,27 @@
+// What the engine found for the selected stage (method, Biot numbers, Fo, cross-check) and the
+// method table of the whole plan, from the method feature.
+import { MethodPanel } from '@/features/method/MethodPanel';
+import { StageMethodTable } from '@/features/method/StageMethodTable';
+import { MAIN_PLAN_ID } from '@/state/connectEngine';
+import { useAppStore } from '@/state/useAppStore';
+
+export function StageReportPanel() {
+  const result = useAppStore((s) => s.results[MAIN_PLAN_ID] ?? null);
+  const selected = useAppStore((s) => s.selectedStageIndex);
+  const system = useAppStore((s) => s.unitSystem);
+  const selectStage = useAppStore((s) => s.selectStage);
+  const stage = result?.stages[selected] ?? null;
+  return (
+    <section className="panel" aria-labelledby="report-heading">
+      <h2 id="report-heading">Stage {selected + 1} report</h2>
+      {!result ? (
+        <p className="stage-muted">The report appears when the first results arrive.</p>
+      ) : stage ? (
+        <MethodPanel stage={stage} points={result.points} system={system} />
+      ) : (
+        <p className="stage-muted">{result.failure && result.failure.index <= selected ? `Not computed: ${result.failure.message}` : 'No result for this stage yet.'}</p>
+      )}
+      {result && result.stages.length > 0 && <StageMethodTable result={result} system={system} selectedStageIndex={selected} onSelectStage={selectStage} />}
+    </section>
+  );
+}
