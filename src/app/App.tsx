@@ -2,6 +2,7 @@
 // engine status, notices and the safety reminder, then the current screen.
 import { useState } from 'react';
 import { UnitToggle } from '@/features/units/UnitToggle';
+import { ExchangeToolbar } from '@/features/exchange/ExchangeToolbar';
 import { TextField } from '@/features/part/TextField';
 import { AppStoreProvider } from '@/state/AppStoreProvider';
 import { useAppStore } from '@/state/useAppStore';
@@ -61,6 +62,7 @@ function Shell({ workbench }: { workbench: Workbench }) {
         <div className="toolbar" role="toolbar" aria-label="Workbench tools">
           <HistoryButtons />
           <UnitSwitch />
+          <ExchangeToolbar />
         </div>
       </header>
       <EngineStatusBar onStop={() => workbench.engine.stop()} onRecompute={workbench.recompute} />

@@ -1,5 +1,5 @@
 // The workbench's exchange tools: save and open plan files, share a link, export CSV, PNG and SVG,
-// and go to the variants and the stage sheet. Results are read from the store, never computed here.
+// (the Variants and Stage sheet screens are in the shell's screen links). Results are read from the store, never computed here.
 import { useRef, useState, type ReactNode } from 'react';
 import { useAppStore } from '@/state/useAppStore';
 import { MAIN_PLAN_ID } from '@/state/connectEngine';
@@ -113,8 +113,6 @@ export function ExchangeToolbar() {
         <button type="button" onClick={() => void exportChart('svg')} disabled={!main} title={noResult ?? 'The temperature chart as an SVG drawing'}>
           SVG
         </button>
-        <a href="#/variants">Variants ({document.variants.length})</a>
-        <a href="#/sheet">Stage sheet</a>
       </div>
       {body ? (
         <div className="cs-exchange-notice" data-testid="exchange-notice">

@@ -1,4 +1,4 @@
-// The stage sheet route (#/sheet): screen controls (back, paper, title block, print) above the
+// The stage sheet screen (#/sheet): screen controls (back, paper, title block, print) above the
 // paper-like sheet. Reads the store; draws the chart as SVG so the printed chart stays vector.
 import { useEffect, useMemo, useState } from 'react';
 import { useAppStore } from '@/state/useAppStore';
@@ -25,7 +25,7 @@ const META_FIELDS: { key: keyof PlanSheetMeta; label: string; placeholder: strin
   { key: 'checkedBy', label: 'Checked by', placeholder: 'left blank to sign' },
 ];
 
-export function SheetPage({ onBack }: { onBack: () => void }) {
+export function SheetPage() {
   const document = useAppStore((s) => s.document);
   const results = useAppStore((s) => s.results);
   const unitSystem = useAppStore((s) => s.unitSystem);
@@ -54,9 +54,7 @@ export function SheetPage({ onBack }: { onBack: () => void }) {
     <div className="cs-sheet-page" data-testid="sheet-page" data-ready={ready ? 'yes' : 'no'} data-paper={paper}>
       <style>{PAGE_RULES[paper]}</style>
       <div className="cs-screen-only cs-sheet-controls" role="toolbar" aria-label="Stage sheet">
-        <button type="button" onClick={onBack}>
-          ← Back to the workbench
-        </button>
+        <a href="#/">← Back to the workbench</a>
         <label>
           Paper{' '}
           <select value={paper} onChange={(e) => setPaper(e.target.value as SheetPaper)} data-testid="sheet-paper">
