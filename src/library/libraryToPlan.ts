@@ -2,12 +2,9 @@
 // are held in kelvin). The library id and the source travel along so a stage sheet can say
 // where each number came from.
 import type { HeatTransfer, Material, Medium } from '@/schema/planSchema';
-import { KELVIN_OFFSET } from '@/schema/planTemperatures';
+import { celsiusToKelvin as toKelvin } from '@/schema/planTemperatures';
 import type { MaterialEntry, MediumEntry } from './libraryEntrySchema';
 
-/** Round away float noise of the degC -> K shift (e.g. 20 + 273.15). */
-const tidy = (x: number) => Number(x.toPrecision(12));
-const toKelvin = (celsius: number) => tidy(celsius + KELVIN_OFFSET);
 
 const rowsToKelvin = (rows: ReadonlyArray<readonly [number, number]>): [number, number][] => rows.map(([c, v]) => [toKelvin(c), v]);
 
@@ -20,6 +17,7 @@ export function materialFromLibrary(entry: MaterialEntry): Material {
     conductivityWPerMK: { table: rowsToKelvin(entry.conductivityWPerMK) },
     densityKgPerM3: { table: rowsToKelvin(entry.densityKgPerM3) },
     specificHeatJPerKgK: { table: rowsToKelvin(entry.specificHeatJPerKgK) },
+    surfaceEmissivity: entry.emissivity.suggested,
   };
 }
 

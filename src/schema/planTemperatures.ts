@@ -58,12 +58,15 @@ export function mapPlanTemperatures<P extends Plan>(plan: P, f: Convert, unit: P
 /** Round away the last bits of float noise so that degC -> K -> degC gives back the typed number. */
 const tidy = (x: number) => Number(x.toPrecision(12));
 
+export const celsiusToKelvin = (celsius: number) => tidy(celsius + KELVIN_OFFSET);
+export const kelvinToCelsius = (kelvin: number) => tidy(kelvin - KELVIN_OFFSET);
+
 export function toKelvinPlan(plan: Plan): PlanK {
   if (plan.temperatureUnit === 'K') return plan as PlanK;
-  return mapPlanTemperatures(plan, (t) => tidy(t + KELVIN_OFFSET), 'K') as PlanK;
+  return mapPlanTemperatures(plan, celsiusToKelvin, 'K') as PlanK;
 }
 
 export function toCelsiusPlan(plan: Plan): Plan {
   if (plan.temperatureUnit === 'degC') return plan;
-  return mapPlanTemperatures(plan, (t) => tidy(t - KELVIN_OFFSET), 'degC');
+  return mapPlanTemperatures(plan, kelvinToCelsius, 'degC');
 }
