@@ -54,6 +54,13 @@ function roots(shape: Shape1D, bi: number): number[] {
   return out;
 }
 
+/** First eigenvalue and coefficient (for checking the fixture against a published table). */
+export function firstTerm(shape: Shape1D, bi: number): { eigenvalue: number; coefficient: number } {
+  const l = roots(shape, bi)[0];
+  const coefficient = shape === 'slab' ? (4 * Math.sin(l)) / (2 * l + Math.sin(2 * l)) : shape === 'cylinder' ? ((2 / l) * j1(l)) / (j0(l) ** 2 + j1(l) ** 2) : (4 * (Math.sin(l) - l * Math.cos(l))) / (2 * l - Math.sin(2 * l));
+  return { eigenvalue: l, coefficient };
+}
+
 export interface ExactTheta {
   centre: number;
   surface: number;
