@@ -45,8 +45,10 @@ export interface StageResult {
   energyRelativeError: number | null;
   /** Largest cooling rate at the surface over the stage, K/s (positive when cooling). */
   maxSurfaceCoolingRateKPerS: number;
-  /** Largest |centre - surface| over the stage, K. */
+  /** Largest |centre - surface| over the stage, K (for finite shapes: against any surface point). */
   maxCentreSurfaceDifferenceK: number;
+  /** Largest difference between any two reported points (mean excluded) over the stage, K: a distortion and cracking indicator. */
+  maxPointSpreadK: number;
   effort: { steps?: number; cells?: number; terms?: number };
   warnings: EngineWarning[];
   /** Sampled curves; timeS from the start of the plan. */
