@@ -1,7 +1,8 @@
 // What the engine found for the selected stage (method, Biot numbers, Fo, cross-check) and the
-// method table of the whole plan, from the method feature.
+// plan's checks (warnings with their rules and advice) and its method table, from the method and warnings features.
 import { MethodPanel } from '@/features/method/MethodPanel';
 import { StageMethodTable } from '@/features/method/StageMethodTable';
+import { WarningList } from '@/features/warnings/WarningList';
 import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { useAppStore } from '@/state/useAppStore';
 
@@ -21,6 +22,8 @@ export function StageReportPanel() {
       ) : (
         <p className="stage-muted">{result.failure && result.failure.index <= selected ? `Not computed: ${result.failure.message}` : 'No result for this stage yet.'}</p>
       )}
+      {/* The standing safety note is the shell's, above every screen. */}
+      {result && <WarningList result={result} showSafetyNote={false} />}
       {result && result.stages.length > 0 && <StageMethodTable result={result} system={system} selectedStageIndex={selected} onSelectStage={selectStage} />}
     </section>
   );
