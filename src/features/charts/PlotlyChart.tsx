@@ -13,7 +13,7 @@ export interface PlotlyChartProps {
   heightPx?: number;
 }
 
-const CHART_CONFIG: Partial<Config> = { responsive: true, displaylogo: false, modeBarButtonsToRemove: ['select2d', 'lasso2d'] };
+const CHART_CONFIG: Partial<Config> = { responsive: true, displaylogo: false, modeBarButtonsToRemove: ['select2d', 'lasso2d', 'zoomIn2d', 'zoomOut2d'] };
 const DEFAULT_HEIGHT_PX = 380;
 
 type LoadState = 'loading' | 'drawn' | 'failed';

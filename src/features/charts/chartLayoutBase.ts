@@ -3,14 +3,19 @@ import type { Layout } from 'plotly.js';
 
 export const CHART_FONT_FAMILY = 'system-ui, -apple-system, "Segoe UI", Roboto, sans-serif';
 
-export function chartLayoutBase(xTitle: string, yTitle: string): Partial<Layout> {
+/** Where the legend sits: under the plot (wide charts) or above it (small charts, where under it would meet the axis title). */
+export type LegendPlace = 'below' | 'above';
+
+export function chartLayoutBase(xTitle: string, yTitle: string, legendPlace: LegendPlace = 'below'): Partial<Layout> {
   return {
     font: { family: CHART_FONT_FAMILY, size: 12, color: '#222' },
-    margin: { t: 36, r: 16, b: 56, l: 64 },
+    // Right margin room for the upright mode bar, so it never sits on a legend above the plot.
+    margin: { t: 36, r: 40, b: 56, l: 64 },
+    modebar: { orientation: 'v' },
     paper_bgcolor: '#ffffff',
     plot_bgcolor: '#ffffff',
     hovermode: 'closest',
-    legend: { orientation: 'h', x: 0, y: -0.18, yanchor: 'top' },
+    legend: legendPlace === 'below' ? { orientation: 'h', x: 0, y: -0.2, yanchor: 'top' } : { orientation: 'h', x: 0, y: 1.02, yanchor: 'bottom' },
     xaxis: { title: { text: xTitle }, gridcolor: '#e3e3e3', zeroline: false, linecolor: '#999', showline: true, ticks: 'outside' },
     yaxis: { title: { text: yTitle }, gridcolor: '#e3e3e3', zeroline: false, linecolor: '#999', showline: true, ticks: 'outside' },
   };

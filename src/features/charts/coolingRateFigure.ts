@@ -57,5 +57,5 @@ export function coolingRateFigure(result: PlanResult, options: CoolingRateOption
       connectgaps: false,
     } satisfies Data];
   });
-  return { data, layout: chartLayoutBase(`Cooling rate (${rate.symbol})`, `Temperature (${temperature.symbol})`) };
+  return { data, layout: chartLayoutBase(`Cooling rate (${rate.symbol})`, `Temperature (${temperature.symbol})`, 'above') };
 }

@@ -51,6 +51,6 @@ export function profileFigure(result: PlanResult, options: ProfileOptions): Char
     } satisfies Data;
   });
 
-  const base = chartLayoutBase(`Distance from ${centreLabel} (${length.symbol})`, `Temperature (${temperature.symbol})`);
+  const base = chartLayoutBase(`Distance from ${centreLabel} (${length.symbol})`, `Temperature (${temperature.symbol})`, 'above');
   return { data, layout: { ...base, xaxis: { ...base.xaxis, rangemode: 'tozero' } } };
 }

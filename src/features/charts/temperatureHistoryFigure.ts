@@ -20,6 +20,26 @@ export interface TemperatureHistoryOptions {
 
 const STAGE_SHADE = 'rgba(40, 70, 120, 0.05)';
 const STAGE_LINE = '#9aa5b1';
+const STAGE_LABEL_ROW_PX = 14;
+const STAGE_LABEL_TOP_PX = 12;
+/** A stage name needs about this share of the plot width before the next name may sit on the same row. */
+const STAGE_LABEL_MIN_GAP = 0.16;
+const STAGE_LABEL_MAX_ROWS = 4;
+
+/**
+ * The row (0 = lowest) of each stage name above the plot, so that names of short stages do not overlap:
+ * a name goes on the lowest row whose last name started at least STAGE_LABEL_MIN_GAP of the plan earlier.
+ * startFractions: each stage's start as a fraction of the whole plan, ascending.
+ */
+export function stageLabelRows(startFractions: readonly number[]): number[] {
+  const lastStartInRow: number[] = [];
+  return startFractions.map((x) => {
+    let row = lastStartInRow.findIndex((last) => x - last >= STAGE_LABEL_MIN_GAP);
+    if (row < 0) row = lastStartInRow.length < STAGE_LABEL_MAX_ROWS ? lastStartInRow.length : lastStartInRow.indexOf(Math.min(...lastStartInRow));
+    lastStartInRow[row] = x;
+    return row;
+  });
+}
 
 export function temperatureHistoryFigure(result: PlanResult, options: TemperatureHistoryOptions): ChartFigure {
   const { system } = options;
@@ -86,14 +106,16 @@ export function temperatureHistoryFigure(result: PlanResult, options: Temperatur
     const boundary: Partial<Shape> = { type: 'line', xref: 'x', yref: 'paper', x0, x1: x0, y0: 0, y1: 1, line: { color: STAGE_LINE, width: 1, dash: 'dash' }, layer: 'below' };
     return i === 0 ? [band] : [band, boundary];
   });
-  const annotations: Partial<Annotations>[] = result.stages.map((stage) => ({
-    xref: 'x', yref: 'paper', x: toAxisTime(stage.startTimeS), y: 1, xanchor: 'left', yanchor: 'bottom', showarrow: false,
+  const rows = stageLabelRows(result.stages.map((s) => s.startTimeS / Math.max(result.totalDurationS, Number.MIN_VALUE)));
+  const annotations: Partial<Annotations>[] = result.stages.map((stage, i) => ({
+    xref: 'x', yref: 'paper', x: toAxisTime(stage.startTimeS), y: 1, yshift: rows[i] * STAGE_LABEL_ROW_PX, xanchor: 'left', yanchor: 'bottom', showarrow: false,
     text: `${stage.index + 1} ${stage.name}`, font: { size: 11, color: '#394b5e' },
   }));
+  const labelRowCount = rows.length > 0 ? Math.max(...rows) + 1 : 0;
 
   const base = chartLayoutBase(`Time (${scale.symbol})`, `Temperature (${temperature.symbol})`);
   return {
     data: [...pointTraces, ...targetTraces, ...extraTraces],
-    layout: { ...base, shapes, annotations, xaxis: { ...base.xaxis, rangemode: 'tozero' } },
+    layout: { ...base, shapes, annotations, margin: { ...base.margin, t: STAGE_LABEL_TOP_PX + labelRowCount * STAGE_LABEL_ROW_PX }, xaxis: { ...base.xaxis, rangemode: 'tozero' } },
   };
 }

@@ -2,7 +2,7 @@
 // Unit conversions themselves are checked against NIST SP 811 in test/unit/units.
 import { describe, expect, it } from 'vitest';
 import type { ScatterData, Shape, Annotations } from 'plotly.js';
-import { temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
+import { stageLabelRows, temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
 import { quenchedShaftResult as result } from '../../components/fixtures/quenchedShaftResult';
 
 const DISPLAY_TOL = 1e-9;
@@ -51,5 +51,16 @@ describe('temperatureHistoryFigure', () => {
   it('tells traces apart by dash and marker, not colour alone', () => {
     const styles = traces(figure).slice(0, 3).map((t) => `${t.line?.dash}/${t.marker?.symbol}`);
     expect(new Set(styles).size).toBe(3);
+  });
+});
+
+describe('stageLabelRows', () => {
+  it('lifts the name of a stage that starts close to the previous one, and reuses free rows', () => {
+    // Starts at 0, 2.5 %, 25 %, 27 % and 60 % of the plan; a name needs 16 % of the width.
+    expect(stageLabelRows([0, 0.025, 0.25, 0.27, 0.6])).toEqual([0, 1, 0, 1, 0]);
+  });
+  it('the fixture plan: the quench starts 2.5 % in, so its name goes one row up', () => {
+    const figure = temperatureHistoryFigure(result, { system: 'si' });
+    expect((figure.layout.annotations as Partial<Annotations>[]).map((a) => a.yshift)).toEqual([0, 14, 0]);
   });
 });
