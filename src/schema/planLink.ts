@@ -15,8 +15,14 @@ const BASE64URL = /^[A-Za-z0-9_-]*$/;
 
 const fail = (message: string): PlanFileOutcome => ({ ok: false, issues: [{ path: '(link)', message }] });
 
-async function pipeBytes(bytes: Uint8Array, transform: CompressionStream | DecompressionStream, maxBytes: number): Promise<Uint8Array | null> {
-  const reader = new Blob([bytes as BlobPart]).stream().pipeThrough(transform).getReader();
+async function pipeBytes(bytes: Uint8Array<ArrayBuffer>, transform: CompressionStream | DecompressionStream, maxBytes: number): Promise<Uint8Array | null> {
+  const source = new ReadableStream<BufferSource>({
+    start(controller) {
+      controller.enqueue(bytes);
+      controller.close();
+    },
+  });
+  const reader = source.pipeThrough(transform).getReader();
   const chunks: Uint8Array[] = [];
   let total = 0;
   for (;;) {
@@ -44,7 +50,7 @@ function toBase64Url(bytes: Uint8Array): string {
   return btoa(binary).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '');
 }
 
-function fromBase64Url(text: string): Uint8Array {
+function fromBase64Url(text: string): Uint8Array<ArrayBuffer> {
   const b64 = text.replace(/-/g, '+').replace(/_/g, '/');
   const binary = atob(b64 + '='.repeat((4 - (b64.length % 4)) % 4));
   return Uint8Array.from(binary, (c) => c.charCodeAt(0));
@@ -75,7 +81,7 @@ export async function decodePlanLink(fragment: string): Promise<PlanFileOutcome>
   if (bare.length > MAX_PLAN_LINK_CHARS) return fail(`the link is ${bare.length} characters long; a plan link may be at most ${MAX_PLAN_LINK_CHARS}`);
   if (payload.length === 0) return fail('the link carries no plan data after "plan="');
   if (!BASE64URL.test(payload)) return fail('the link contains characters that cannot be part of a plan link; it may have been altered or cut when copied');
-  let bytes: Uint8Array;
+  let bytes: Uint8Array<ArrayBuffer>;
   try {
     bytes = fromBase64Url(payload);
   } catch {

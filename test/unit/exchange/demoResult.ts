@@ -32,6 +32,7 @@ export function stageFixture(f: StageFixture): StageResult {
     energyRelativeError: null,
     maxSurfaceCoolingRateKPerS: f.maxSurfaceCoolingRateKPerS,
     maxCentreSurfaceDifferenceK: f.maxCentreSurfaceDifferenceK,
+    maxPointSpreadK: f.maxCentreSurfaceDifferenceK,
     effort: {},
     warnings: [],
     curves: { timeS: f.timeS, temperaturesK: { centre: f.centreK, surface: f.surfaceK, mean: f.meanK } },
