@@ -23,5 +23,7 @@ export async function chartToSvgText(figure: ChartFigure, size: ChartImageSize):
   const plotly = await loadPlotly();
   const url = await plotly.toImage({ data: figure.data, layout: figure.layout }, { format: 'svg', width: size.widthPx, height: size.heightPx });
   const body = url.replace(SVG_DATA_URL_PREFIX, '');
-  return url.includes(';base64,') ? atob(body) : decodeURIComponent(body);
+  if (!url.includes(';base64,')) return decodeURIComponent(body);
+  // base64 carries UTF-8 bytes (e.g. the ° of axis titles): decode them as such, not as Latin-1.
+  return new TextDecoder().decode(Uint8Array.from(atob(body), (c) => c.charCodeAt(0)));
 }

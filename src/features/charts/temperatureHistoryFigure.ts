@@ -21,6 +21,7 @@ export interface TemperatureHistoryOptions {
 const STAGE_SHADE = 'rgba(40, 70, 120, 0.05)';
 const STAGE_LINE = '#9aa5b1';
 const STAGE_LABEL_ROW_PX = 14;
+const FAILURE_COLOUR = '#a3281b';
 const STAGE_LABEL_TOP_PX = 12;
 /** A stage name needs about this share of the plot width before the next name may sit on the same row. */
 const STAGE_LABEL_MIN_GAP = 0.16;
@@ -112,6 +113,17 @@ export function temperatureHistoryFigure(result: PlanResult, options: Temperatur
     text: `${stage.index + 1} ${stage.name}`, font: { size: 11, color: '#394b5e' },
   }));
   const labelRowCount = rows.length > 0 ? Math.max(...rows) + 1 : 0;
+  const failure = result.failure;
+  if (failure) {
+    // The plan stopped: mark where, so the curves are not read as the whole plan.
+    const last = result.stages[result.stages.length - 1];
+    const stopS = last ? last.startTimeS + last.durationS : 0;
+    shapes.push({ type: 'line', xref: 'x', yref: 'paper', x0: toAxisTime(stopS), x1: toAxisTime(stopS), y0: 0, y1: 1, line: { color: FAILURE_COLOUR, width: 2, dash: 'dot' } });
+    annotations.push({
+      xref: 'x', yref: 'paper', x: toAxisTime(stopS), y: 0.5, xanchor: 'right', showarrow: false, bgcolor: 'rgba(255,255,255,0.85)',
+      text: `stage ${failure.index + 1} (${failure.name}) not computed ▸`, font: { size: 11, color: FAILURE_COLOUR },
+    });
+  }
 
   const base = chartLayoutBase(`Time (${scale.symbol})`, `Temperature (${temperature.symbol})`);
   return {

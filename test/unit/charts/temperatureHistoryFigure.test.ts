@@ -64,3 +64,13 @@ describe('stageLabelRows', () => {
     expect((figure.layout.annotations as Partial<Annotations>[]).map((a) => a.yshift)).toEqual([0, 14, 0]);
   });
 });
+
+describe('a plan that stopped', () => {
+  it('marks where the computed stages end and names the stage that was not computed', () => {
+    const stopped = { ...result, stages: result.stages.slice(0, 2), failure: { index: 2, name: 'air hold', code: 'target-unreachable', message: 'cannot reach' } };
+    const figure = temperatureHistoryFigure(stopped, { system: 'si' });
+    const last = (figure.layout.annotations as Partial<Annotations>[]).at(-1);
+    expect(last?.text).toBe('stage 3 (air hold) not computed ▸');
+    expect(last?.x).toBe(202.5 / 60);
+  });
+});
