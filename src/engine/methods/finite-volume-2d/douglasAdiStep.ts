@@ -4,8 +4,8 @@
 // Douglas, Numer. Math. 4 (1962) 41 and Douglas and Gunn, Numer. Math. 6 (1964) 428 (from memory):
 // unconditionally stable for constant coefficients, second order in time and space.
 // Every split stage is a sum of face fluxes, so the heat through the surface equals the change of
-// stored energy to rounding. The capacity is the enthalpy chord (e(u') - e(u))/(u' - u); k (at the
-// step's mid temperature), h(Ts) and radiation are re-linearised about the new iterate until it moves
+// stored energy to rounding. The capacity is the enthalpy chord (e(u') - e(u))/(u' - u); k (the mean of
+// its values at both ends of the step), h(Ts) and radiation are re-linearised about the new iterate until it moves
 // less than picardToleranceK (the caller sets it well below the reported tolerance): the modified Picard iteration of Celia, Bouloutas and Zarba,
 // Water Resour. Res. 26 (1990) 1483, which conserves the integral exactly at convergence (from memory).
 // Convergence: a step that has not converged in PICARD_MAX_ITERATIONS is reported so the caller
@@ -16,7 +16,7 @@ import { solveTridiagonal } from '../../numerics/solveTridiagonal';
 import type { FiniteGrid } from './finiteGrid';
 
 const PICARD_MAX_ITERATIONS = 25;
-/** Below this change the chord capacity is C at the middle (the enthalpy difference would lose digits). */
+/** Below this change the chord capacity is the mean of C at both ends (the enthalpy difference would lose digits). */
 const CHORD_MIN_CHANGE_K = 1e-4;
 
 export interface AdiStepResult {
@@ -43,14 +43,14 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
   const uStar = new Float64Array(size);
   // Predictor for the first iterate: the last converged step's rate of change (none at first).
   const rateKPerS = new Float64Array(size);
-  const mid = new Float64Array(size);
   const k = new Float64Array(size);
+  const k0 = new Float64Array(size);
+  const kStar = new Float64Array(size);
   const scratch = new Float64Array(size);
   const c0 = new Float64Array(size);
   const e0 = new Float64Array(size);
   const cStar = new Float64Array(size);
   const eStar = new Float64Array(size);
-  const cMid = new Float64Array(size);
   const capPerDt = new Float64Array(size);
   const qStar = new Float64Array(size);
   const qSlope = new Float64Array(size);
@@ -94,21 +94,24 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
   return {
     step(u, dtS, out) {
       for (let p = 0; p < size; p++) uStar[p] = u[p] + rateKPerS[p] * dtS;
-      evaluateMaterial(table, u, size, k, scratch, c0, e0);
+      evaluateMaterial(table, u, size, k0, scratch, c0, e0);
+      if (constantProperties) k.set(k0);
       let iterations = 0;
       let converged = false;
       let heatOutJ = 0;
       while (iterations < PICARD_MAX_ITERATIONS) {
         iterations++;
-        if (!constantProperties) {
-          for (let p = 0; p < size; p++) mid[p] = 0.5 * (u[p] + uStar[p]);
-          evaluateMaterial(table, mid, size, k, scratch, cMid, scratch);
-          evaluateMaterial(table, uStar, size, scratch, scratch, cStar, eStar);
-        }
-        for (let p = 0; p < size; p++) {
-          const change = uStar[p] - u[p];
-          const chord = constantProperties ? c0[p] : Math.abs(change) < CHORD_MIN_CHANGE_K ? cMid[p] : (eStar[p] - e0[p]) / change;
-          capPerDt[p] = (volumeM3[p] * chord) / dtS;
+        if (constantProperties) {
+          for (let p = 0; p < size; p++) capPerDt[p] = (volumeM3[p] * c0[p]) / dtS;
+        } else {
+          evaluateMaterial(table, uStar, size, kStar, scratch, cStar, eStar);
+          for (let p = 0; p < size; p++) {
+            // k over the step by the trapezoid rule (second order, like the Crank-Nicolson base).
+            k[p] = 0.5 * (k0[p] + kStar[p]);
+            const change = uStar[p] - u[p];
+            const chord = Math.abs(change) < CHORD_MIN_CHANGE_K ? 0.5 * (c0[p] + cStar[p]) : (eStar[p] - e0[p]) / change;
+            capPerDt[p] = (volumeM3[p] * chord) / dtS;
+          }
         }
         for (const p of surfaceNodes) {
           qStar[p] = boundary.fluxOut(uStar[p]);

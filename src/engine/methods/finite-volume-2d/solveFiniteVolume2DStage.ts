@@ -20,14 +20,13 @@ import { startOnGrid } from './startOnGrid';
 import { douglasAdiStepper } from './douglasAdiStep';
 import { tabulateMaterial, evaluateMaterial } from '../finite-volume/tabulateMaterial';
 import { tensorGridTemperatureAt } from './tensorGridTemperatureAt';
-import { tensorGridMeanK } from './tensorGridMeanK';
 import { resampleMonotone } from './resampleMonotone';
 import { findRootBracketed } from '../../numerics/findRootBracketed';
 import { equilibriumTemperature } from '../finite-volume/equilibriumTemperature';
 
 const DEFAULT_NODES_2D = 41;
 const DEFAULT_NODES_3D = 21;
-const STEP_TARGET_CHANGE_K = 5;
+const STEP_TARGET_CHANGE_K = 10;
 const STEP_GROWTH_MAX = 1.5;
 /** First step as a fraction of the smallest cell's diffusion time h²/alpha. */
 const FIRST_STEP_FOURIER = 0.05;
@@ -37,7 +36,7 @@ const MAX_STAGE_S = 1e8;
 /** Relative width in step length to which a crossing is located (far below any reported tolerance in K). */
 const LOCATE_STEP_TOLERANCE = 1e-10;
 /** The Picard iteration stops when the iterate moves less than this fraction of toleranceK. */
-const PICARD_SHARE_OF_TOLERANCE = 0.01;
+const PICARD_SHARE_OF_TOLERANCE = 0.1;
 /** Margin of the material table beyond the temperatures a stage can reach, K. */
 const TABLE_MARGIN_K = 5;
 
@@ -71,9 +70,13 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
     probes.push({ id: 'depth', positionM: axes.map((_, d) => (d === 0 ? halfM - (problem.depthM ?? 0) : 0)) });
   }
   const field: TensorGridField = { kind: 'tensor-grid', nodesM: grid.axes.map((a) => a.nodesM), temperaturesK: u };
+  // The volume mean uses the grid's own control volumes (the quadrature of tensorGridMeanK).
+  const volumeTotalM3 = grid.volumeM3.reduce((a, b) => a + b, 0);
   const valueOf = (temperaturesK: Float64Array, positionM: number[] | null) => {
-    const f = { ...field, temperaturesK };
-    return positionM ? tensorGridTemperatureAt(f, positionM) : tensorGridMeanK(f, axes);
+    if (positionM) return tensorGridTemperatureAt({ ...field, temperaturesK }, positionM);
+    let sum = 0;
+    for (let p = 0; p < temperaturesK.length; p++) sum += grid.volumeM3[p] * temperaturesK[p];
+    return sum / volumeTotalM3;
   };
   let targetProbe: (typeof probes)[number] | undefined;
   if (end.kind === 'point-temperature') {
