@@ -74,3 +74,22 @@ describe('a plan that stopped', () => {
     expect(last?.x).toBe(202.5 / 60);
   });
 });
+
+describe('finite shapes', () => {
+  it('draws every reported point, corner and edge included, each with its own dash and marker', () => {
+    const points = [
+      { id: 'centre' as const, label: 'centre' },
+      { id: 'face-x' as const, label: 'face ⟂ x, middle' },
+      { id: 'edge' as const, label: 'edge along x (the longest side), middle' },
+      { id: 'corner' as const, label: 'corner' },
+      { id: 'mean' as const, label: 'volume mean' },
+    ];
+    const stages = result.stages.map((s) => ({
+      ...s,
+      curves: { timeS: s.curves.timeS, temperaturesK: { centre: s.curves.temperaturesK.centre, 'face-x': s.curves.temperaturesK.surface, edge: s.curves.temperaturesK.surface, corner: s.curves.temperaturesK.surface, mean: s.curves.temperaturesK.mean } },
+    }));
+    const data = traces(temperatureHistoryFigure({ ...result, points, stages }, { system: 'si' }));
+    expect(data.map((t) => t.name)).toEqual(points.map((p) => p.label));
+    expect(new Set(data.map((t) => `${t.line?.dash}/${t.marker?.symbol}`)).size).toBe(points.length);
+  });
+});
