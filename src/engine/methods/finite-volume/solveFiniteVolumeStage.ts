@@ -17,7 +17,7 @@ import { createTrBdf2Stepper, type TrBdf2Stepper } from './trBdf2Stepper';
 import { createPointHistory, recordPoints, samplePoint } from './pointHistory';
 import { sizeGrid } from './sizeGrid';
 import { equilibriumTemperature } from './equilibriumTemperature';
-import { temperatureAt } from './sampleStartField';
+import { temperatureAt } from '../series/evaluateField1D';
 
 /** Share of the tolerance given to the local time error of one step (the rest to space and accumulation). Common practice. */
 const TIME_TOLERANCE_FRACTION = 0.1;
