@@ -18,7 +18,7 @@ export interface Workbench {
   stop(): void;
 }
 
-export function startWorkbench(storage: Storage, createWorker: () => WorkerLike): Workbench {
+export function startWorkbench(storage: Pick<Storage, 'getItem' | 'setItem'>, createWorker: () => WorkerLike): Workbench {
   const loaded = readSavedWorkbench(storage);
   const store = createAppStore({ document: loaded.document ?? demoDocument(), unitSystem: loaded.unitSystem });
   const autosave = startAutosave(store, storage);

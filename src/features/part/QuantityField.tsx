@@ -8,6 +8,8 @@ import { parseQuantity } from '@/features/units/parseQuantity';
 
 /** Digits kept when a value in SI is written back into a field (enough not to lose a typed value). */
 const FIELD_SIGNIFICANT_DIGITS = 6;
+/** Typed text and stored value agree when within this relative difference (float rounding of unit factors). */
+const SAME_VALUE_RELATIVE = 1e-9;
 
 export function fieldText(kind: QuantityKind, valueSI: number, system: UnitSystem): string {
   return String(Number(displayUnit(kind, system).fromSI(valueSI).toPrecision(FIELD_SIGNIFICANT_DIGITS)));
@@ -33,9 +35,14 @@ export function QuantityField({ label, kind, valueSI, system, onCommit, check, h
   const focused = useRef(false);
   const unit = displayUnit(kind, system);
 
-  // A change from outside (undo, unit switch, another control) rewrites the text unless the user is typing here.
+  const textRef = useRef(text);
+  textRef.current = text;
+  // A change from outside (undo, unit switch, another control) rewrites the text, unless the user is
+  // typing here and the text already says this value.
   useEffect(() => {
-    if (!focused.current) {
+    const typed = parseQuantity(kind, textRef.current, system);
+    const saysThisValue = typed.ok && Math.abs(typed.valueSI - valueSI) <= SAME_VALUE_RELATIVE * Math.abs(valueSI);
+    if (!focused.current || !saysThisValue) {
       setText(fieldText(kind, valueSI, system));
       setError(null);
     }

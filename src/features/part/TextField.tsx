@@ -13,8 +13,11 @@ export function TextField({ label, value, onCommit, multiline }: TextFieldProps)
   const [text, setText] = useState(value);
   const [error, setError] = useState<string | null>(null);
   const focused = useRef(false);
+  const textRef = useRef(text);
+  textRef.current = text;
+  // An outside change (undo, another control) rewrites the text unless it already says this value.
   useEffect(() => {
-    if (!focused.current) {
+    if (!focused.current || textRef.current !== value) {
       setText(value);
       setError(null);
     }
