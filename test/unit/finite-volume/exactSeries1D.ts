@@ -28,9 +28,15 @@ function bisect(g: (x: number) => number, a: number, b: number): number {
   return 0.5 * (a + b);
 }
 
-/** Positive roots, one per bracket between consecutive poles of the characteristic function. */
+const rootCache = new Map<string, number[]>();
+
+/** Positive roots, one per bracket between consecutive poles of the characteristic function (cached). */
 function roots(shape: Shape1D, bi: number): number[] {
+  const key = `${shape}:${bi}`;
+  const known = rootCache.get(key);
+  if (known) return known;
   const out: number[] = [];
+  rootCache.set(key, out);
   const eps = 1e-12;
   if (shape === 'slab') {
     for (let n = 0; n < TERMS; n++) out.push(bisect((l) => l * Math.sin(l) - bi * Math.cos(l), n * Math.PI + eps, n * Math.PI + Math.PI / 2 - eps));
