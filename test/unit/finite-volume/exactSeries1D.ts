@@ -7,6 +7,7 @@
 // Carslaw and Jaeger, Conduction of Heat in Solids, 2nd ed., Secs. 3.10, 7.7, 9.9; Incropera et al., Fundamentals of
 // Heat and Mass Transfer, 6th ed., Eqs. 5.39-5.50 (from memory). J0, J1 from the `bessel` package (SheetJS).
 import { besselj } from 'bessel';
+import type { Series1DField } from '@/engine/fields';
 
 export type Shape1D = 'slab' | 'cylinder' | 'sphere';
 const TERMS = 200;
@@ -63,8 +64,18 @@ function roots(shape: Shape1D, bi: number): number[] {
 /** First eigenvalue and coefficient (for checking the fixture against a published table). */
 export function firstTerm(shape: Shape1D, bi: number): { eigenvalue: number; coefficient: number } {
   const l = roots(shape, bi)[0];
-  const coefficient = shape === 'slab' ? (4 * Math.sin(l)) / (2 * l + Math.sin(2 * l)) : shape === 'cylinder' ? ((2 / l) * j1(l)) / (j0(l) ** 2 + j1(l) ** 2) : (4 * (Math.sin(l) - l * Math.cos(l))) / (2 * l - Math.sin(2 * l));
-  return { eigenvalue: l, coefficient };
+  return { eigenvalue: l, coefficient: seriesCoefficient(shape, l) };
+}
+
+/** The exact solution at Fo as a series-1d field (the first `terms` terms), for starting a stage from it. */
+export function exactSeriesField(shape: Shape1D, bi: number, fo: number, lengthM: number, startK: number, mediumK: number, terms: number): Series1DField {
+  const ls = roots(shape, bi).slice(0, terms);
+  const amplitudesK = Float64Array.from(ls, (l) => (startK - mediumK) * seriesCoefficient(shape, l) * Math.exp(-l * l * fo));
+  return { kind: 'series-1d', geometry: shape, lengthM, offsetK: mediumK, eigenvalues: Float64Array.from(ls), amplitudesK };
+}
+
+function seriesCoefficient(shape: Shape1D, l: number): number {
+  return shape === 'slab' ? (4 * Math.sin(l)) / (2 * l + Math.sin(2 * l)) : shape === 'cylinder' ? ((2 / l) * j1(l)) / (j0(l) ** 2 + j1(l) ** 2) : (4 * (Math.sin(l) - l * Math.cos(l))) / (2 * l - Math.sin(2 * l));
 }
 
 export interface ExactTheta {
@@ -77,9 +88,7 @@ export interface ExactTheta {
 /** Dimensionless temperature theta = (T - T_inf)/(T_i - T_inf) at Fo = alpha t / L². */
 export function exactTheta(shape: Shape1D, bi: number, fo: number): ExactTheta {
   const ls = roots(shape, bi);
-  const coeff = ls.map((l) =>
-    shape === 'slab' ? (4 * Math.sin(l)) / (2 * l + Math.sin(2 * l)) : shape === 'cylinder' ? ((2 / l) * j1(l)) / (j0(l) ** 2 + j1(l) ** 2) : (4 * (Math.sin(l) - l * Math.cos(l))) / (2 * l - Math.sin(2 * l)),
-  );
+  const coeff = ls.map((l) => seriesCoefficient(shape, l));
   const space = (l: number, x: number) => (shape === 'slab' ? Math.cos(l * x) : shape === 'cylinder' ? j0(l * x) : x === 0 ? 1 : Math.sin(l * x) / (l * x));
   const meanFactor = (l: number) => (shape === 'slab' ? Math.sin(l) / l : shape === 'cylinder' ? (2 * j1(l)) / l : (3 * (Math.sin(l) - l * Math.cos(l))) / l ** 3);
   const at = (x: number) => ls.reduce((s, l, i) => s + coeff[i] * Math.exp(-l * l * fo) * space(l, x), 0);

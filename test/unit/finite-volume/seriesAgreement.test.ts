@@ -2,7 +2,7 @@
 // all three shapes, Bi 0.01, 1, 100, Fo 0.01, 0.1, 1, centre / surface / mean.
 // Reference: exactSeries1D.ts (Carslaw and Jaeger, Conduction of Heat in Solids, 2nd ed., Secs. 3.10, 7.7, 9.9 (from memory)).
 import { describe, expect, it } from 'vitest';
-import { exactTheta, firstTerm, type Shape1D } from './exactSeries1D';
+import { exactSeriesField, exactTheta, firstTerm, type Shape1D } from './exactSeries1D';
 import { solveFiniteVolumeStage, solveFiniteVolumeStageWith } from '@/engine/methods/finite-volume/solveFiniteVolumeStage';
 import { sizeGrid } from '@/engine/methods/finite-volume/sizeGrid';
 import { ALPHA_M2_PER_S, CONSTANT_K_W_PER_MK, LENGTH_M, convection, lastOf, problemOf, solved } from './stageProblemFixture';
@@ -74,5 +74,21 @@ describe('grid sized from Bi and the tolerance, checked at two resolutions', () 
         }
       });
     }
+  }
+});
+
+describe('starting from an exact series field', () => {
+  // The exact field at Fo 0.1 handed in as a series-1d start (40 terms: the neglected tail is below 1e-15 at Fo 0.1),
+  // continued for Fo 0.1 more in the same medium, must match the exact series at Fo 0.2.
+  for (const shape of ['slab', 'cylinder', 'sphere'] as Shape1D[]) {
+    it(`${shape}, Bi 1: series-1d start at Fo 0.1, end at Fo 0.2 within ${THETA_TOLERANCE} in theta`, () => {
+      const problem = { ...problemAt(shape, 1, 0.1), start: exactSeriesField(shape, 1, 0.1, LENGTH_M, START_K, MEDIUM_K, 40) };
+      const solution = solved(solveFiniteVolumeStage(problem));
+      const exact = exactTheta(shape, 1, 0.2);
+      for (const point of ['centre', 'surface', 'mean'] as const) {
+        const got = (lastOf(solution, point) - MEDIUM_K) / SPAN_K;
+        expect(Math.abs(got - exact[point]), `${shape} ${point}: got theta ${got}, expected ${exact[point]}, tolerance ${THETA_TOLERANCE}`).toBeLessThan(THETA_TOLERANCE);
+      }
+    });
   }
 });
