@@ -64,10 +64,12 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   // Reported points: the geometry's positioned points, the mean, and the depth below face-x when asked.
   const probes: { id: PointId; positionM: number[] | null }[] = [];
   for (const point of geometry.points) probes.push({ id: point.id, positionM: point.positionM ?? null });
-  if (problem.depthM !== undefined) {
+  // The end condition's own depth wins over the plan's reported depth.
+  const depthM = (end.kind === 'point-temperature' && end.point === 'depth' ? end.depthM : undefined) ?? problem.depthM;
+  if (depthM !== undefined) {
     const halfM = axes[0].halfLengthM;
-    if (problem.depthM > halfM) return { ok: false, code: 'not-applicable', message: `Depth ${problem.depthM} m is deeper than the centre (${halfM} m below the ${axes[0].name === 'r' ? 'side' : 'face ⟂ x'}).` };
-    probes.push({ id: 'depth', positionM: axes.map((_, d) => (d === 0 ? halfM - (problem.depthM ?? 0) : 0)) });
+    if (depthM > halfM) return { ok: false, code: 'not-applicable', message: `Depth ${depthM} m is deeper than the centre (${halfM} m below the ${axes[0].name === 'r' ? 'side' : 'face ⟂ x'}).` };
+    probes.push({ id: 'depth', positionM: axes.map((_, d) => (d === 0 ? halfM - depthM : 0)) });
   }
   const field: TensorGridField = { kind: 'tensor-grid', nodesM: grid.axes.map((a) => a.nodesM), temperaturesK: u };
   // The volume mean uses the grid's own control volumes (the quadrature of tensorGridMeanK).
