@@ -100,6 +100,17 @@ function fieldRange(field: Field, probeNodes: Float64Array): { min: number; max:
   return { min, max };
 }
 
+/** Largest node spacing and surface spacing of `nodes` no larger than those of `needed`. */
+function atLeastAsFine(nodes: Float64Array, needed: Float64Array): boolean {
+  const widest = (x: Float64Array) => {
+    let w = 0;
+    for (let i = 1; i < x.length; i++) w = Math.max(w, x[i] - x[i - 1]);
+    return w;
+  };
+  const surface = (x: Float64Array) => x[x.length - 1] - x[x.length - 2];
+  return nodes.length >= 2 && widest(nodes) <= widest(needed) * (1 + 1e-9) && surface(nodes) <= surface(needed) * (1 + 1e-9);
+}
+
 const kelvin = (t: number) => `${t.toFixed(2)} K`;
 
 export function solveFiniteVolumeStage(problem: StageProblem): StageOutcome {
@@ -155,8 +166,10 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
   const cellCount = overrides.cellCount ?? sized.cellCount;
   const stretch = overrides.stretch ?? sized.stretch;
   const pinned = [problem.depthM, targetDepthM].filter((d): d is number => d !== undefined).map(depthX);
-  const reuse = start.kind === 'grid-1d' && overrides.cellCount === undefined && start.nodesM.length >= cellCount + 1 && start.nodesM.length <= 2 * cellCount + 1;
-  const grid = reuse ? gridOnNodes(oneD.geometry, lengthM, start.nodesM.slice(), geometry.volumeM3) : buildVolumeGrid(oneD.geometry, lengthM, cellCount, stretch, pinned, geometry.volumeM3);
+  const sizedGrid = buildVolumeGrid(oneD.geometry, lengthM, cellCount, stretch, pinned, geometry.volumeM3);
+  // A previous stage's grid at least as fine everywhere is kept: no interpolation (and no energy change) at the joint.
+  const reuse = start.kind === 'grid-1d' && overrides.cellCount === undefined && atLeastAsFine(start.nodesM, sizedGrid.nodesM);
+  const grid = reuse ? gridOnNodes(oneD.geometry, lengthM, start.nodesM.slice(), geometry.volumeM3) : sizedGrid;
   const n = grid.nodeCount;
 
   const initialK = new Float64Array(n);
