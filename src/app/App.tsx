@@ -62,9 +62,9 @@ function Shell({ workbench }: { workbench: Workbench }) {
         <div className="toolbar" role="toolbar" aria-label="Workbench tools">
           <HistoryButtons />
           <UnitSwitch />
-          <ExchangeToolbar />
         </div>
       </header>
+      <ExchangeToolbar />
       <EngineStatusBar onStop={() => workbench.engine.stop()} onRecompute={workbench.recompute} />
       {notice && (
         <div className="notice" role="alert">

@@ -25,12 +25,12 @@ export function freeVariantId(variants: readonly PlanVariant[]): string {
   return `v${n}`;
 }
 
-function freeVariantName(base: string, variants: readonly PlanVariant[]): string {
+/** Short names read best in legends and table headers: "Variant 1", "Variant 2"... */
+function freeVariantName(variants: readonly PlanVariant[]): string {
   const taken = new Set(variants.map((v) => v.name));
-  for (let n = 1; ; n += 1) {
-    const name = `${base} (variant ${n})`.slice(0, 120);
-    if (!taken.has(name)) return name;
-  }
+  let n = variants.length + 1;
+  while (taken.has(`Variant ${n}`)) n += 1;
+  return `Variant ${n}`;
 }
 
 export const createVariantsSlice: StateCreator<AppState, [], [], VariantsSlice> = (_set, get) => {
@@ -46,7 +46,7 @@ export const createVariantsSlice: StateCreator<AppState, [], [], VariantsSlice> 
       if (document.variants.length >= MAX_VARIANTS) return null;
       const source = document.variants.find((v) => v.id === fromId)?.plan ?? document.main;
       const id = freeVariantId(document.variants);
-      const name = freeVariantName(document.main.name, document.variants);
+      const name = freeVariantName(document.variants);
       commit((d) => ({ ...d, variants: [...d.variants, { id, name, plan: { ...structuredClone(source), name } }] }));
       return id;
     },

@@ -85,7 +85,8 @@ export function ExchangeToolbar() {
 
   return (
     <div className="cs-exchange">
-      <div className="cs-exchange-buttons" role="group" aria-label="Files and sharing">
+      <div className="cs-exchange-buttons" role="toolbar" aria-label="Files, sharing and exports">
+        <span>Plan file:</span>
         <button type="button" onClick={save} title="Save the plan and its variants as a .coolstage.json file">
           Save
         </button>
@@ -93,9 +94,10 @@ export function ExchangeToolbar() {
           Open…
         </button>
         <input ref={fileInput} type="file" accept=".json,application/json" hidden data-testid="open-file-input" onChange={(e) => void open(e.target.files?.[0])} />
-        <button type="button" onClick={() => void share()} title="Make a link that carries the plan">
+        <button type="button" className="cs-exchange-gap" onClick={() => void share()} title="Make a link that carries the plan">
           Share link
         </button>
+        <span className="cs-exchange-gap">Results:</span>
         <select value={csvStage} onChange={(e) => setCsvStage(e.target.value)} aria-label="CSV covers" data-testid="csv-scope">
           <option value="all">whole plan</option>
           {document.main.stages.map((s, i) => (
@@ -107,6 +109,7 @@ export function ExchangeToolbar() {
         <button type="button" onClick={exportCsv} disabled={!main} title={noResult ?? 'Temperatures at every reported point against time, as CSV'}>
           Export CSV
         </button>
+        <span className="cs-exchange-gap">Chart:</span>
         <button type="button" onClick={() => void exportChart('png')} disabled={!main} title={noResult ?? 'The temperature chart as a PNG image'}>
           PNG
         </button>

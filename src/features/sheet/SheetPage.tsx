@@ -16,7 +16,10 @@ const PAGE_RULES: Record<SheetPaper, string> = {
   letter: '@page { size: letter portrait; margin: 0.55in 0.5in; }',
 };
 /** Drawn at about the printed width (180 mm at 96 px/in) so the text in the SVG prints at its set size. */
-const SHEET_CHART_SIZE = { widthPx: 680, heightPx: 360 };
+const SHEET_CHART_SIZE = { widthPx: 680, heightPx: 400 };
+const SHEET_CHART_BOTTOM_MARGIN_PX = 110;
+/** Legend top, as a fraction of the plot height below the plot area. */
+const SHEET_LEGEND_Y = -0.3;
 
 const META_FIELDS: { key: keyof PlanSheetMeta; label: string; placeholder: string }[] = [
   { key: 'revision', label: 'Revision', placeholder: 'e.g. A' },
@@ -34,7 +37,11 @@ export function SheetPage() {
   const [chart, setChart] = useState<{ svg: string; for: unknown } | null>(null);
   const main = results[MAIN_PLAN_ID];
 
-  const figure = useMemo(() => planOverlayFigure(document, results, unitSystem), [results, document, unitSystem]);
+  const figure = useMemo(() => {
+    const f = planOverlayFigure(document, results, unitSystem);
+    // On paper the legend sits well below the time axis title, with room for two rows of variants.
+    return f && { ...f, layout: { ...f.layout, margin: { ...f.layout.margin, b: SHEET_CHART_BOTTOM_MARGIN_PX }, legend: { ...f.layout.legend, y: SHEET_LEGEND_Y } } };
+  }, [results, document, unitSystem]);
 
   useEffect(() => {
     let current = true;

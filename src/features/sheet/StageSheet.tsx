@@ -130,16 +130,15 @@ export function StageSheet({ document, results, unitSystem, chartSvg, todayIso, 
             <tr>
               <th scope="col">#</th>
               <th scope="col">Stage and medium</th>
-              <th scope="col">Medium T</th>
               <th scope="col">Heat transfer</th>
               <th scope="col">Ends</th>
               <th scope="col">Duration</th>
               <th scope="col">Centre start → end</th>
               <th scope="col">Surface start → end</th>
               <th scope="col">Method</th>
-              <th scope="col">Bi (V/A)</th>
-              <th scope="col">Bi (series)</th>
-              <th scope="col">Fo at end</th>
+              <th scope="col" title="Biot number on V/A">Bi (V/A)</th>
+              <th scope="col" title="Biot number on the series length">Bi (series)</th>
+              <th scope="col" title="Fourier number at the end of the stage">Fo at end</th>
             </tr>
           </thead>
           <tbody>
@@ -152,19 +151,20 @@ export function StageSheet({ document, results, unitSystem, chartSvg, todayIso, 
                   <td>
                     <strong>{stage.name}</strong>
                     <br />
-                    {stage.medium.name}
+                    <span className="cs-sheet-medium-name">{stage.medium.name}</span>
+                    <br />
+                    <span className="cs-nowrap">at {t(stage.medium.temperature)}</span>
                   </td>
-                  <td>{t(stage.medium.temperature)}</td>
                   <td>{describeHeatTransfer(stage.medium, unitSystem)}</td>
                   <td>{describeEndCondition(stage.end, unitSystem)}</td>
                   {r ? (
                     <>
-                      <td>{formatQuantity('duration', r.durationS, unitSystem)}</td>
+                      <td className="cs-nowrap">{formatQuantity('duration', r.durationS, unitSystem)}</td>
                       <td>
-                        {t(r.startK.centre)} → {t(r.endK.centre)}
+                        <span className="cs-nowrap">{t(r.startK.centre)} →</span> <span className="cs-nowrap">{t(r.endK.centre)}</span>
                       </td>
                       <td>
-                        {t(r.startK.surface)} → {t(r.endK.surface)}
+                        <span className="cs-nowrap">{t(r.startK.surface)} →</span> <span className="cs-nowrap">{t(r.endK.surface)}</span>
                       </td>
                       <td>
                         {METHOD_WORDS[r.method] ?? r.method}

@@ -12,7 +12,7 @@ describe('variantsSlice', () => {
     const id = s.getState().addVariant();
     expect(id).toBe('v1');
     const v = s.getState().document.variants[0];
-    expect(v.name).toBe('Pin 40 mm, air then hold (variant 1)');
+    expect(v.name).toBe('Variant 1');
     expect({ ...v.plan, name: demoPlanK.name }).toEqual(demoPlanK);
     s.getState().editVariant('v1', (p) => ({ ...p, stages: bathVariantK.stages }));
     expect(s.getState().document.variants[0].plan.stages[1].medium.name).toBe('agitated liquid bath');
@@ -25,7 +25,7 @@ describe('variantsSlice', () => {
     s.getState().addVariant();
     s.getState().renameVariant('v2', 'Liquid bath');
     expect(s.getState().document.variants.map((v) => [v.id, v.name, v.plan.name])).toEqual([
-      ['v1', 'Pin 40 mm, air then hold (variant 1)', 'Pin 40 mm, air then hold (variant 1)'],
+      ['v1', 'Variant 1', 'Variant 1'],
       ['v2', 'Liquid bath', 'Liquid bath'],
     ]);
     s.getState().removeVariant('v1');
