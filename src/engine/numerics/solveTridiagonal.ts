@@ -16,12 +16,13 @@ export function solveTridiagonal(
   x: Float64Array,
   work: Float64Array,
 ): void {
-  let beta = diag[0];
-  x[0] = rhs[0] / beta;
+  let inv = 1 / diag[0];
+  x[0] = rhs[0] * inv;
   for (let i = 1; i < n; i++) {
-    work[i] = upper[i - 1] / beta;
-    beta = diag[i] - lower[i] * work[i];
-    x[i] = (rhs[i] - lower[i] * x[i - 1]) / beta;
+    const w = upper[i - 1] * inv;
+    work[i] = w;
+    inv = 1 / (diag[i] - lower[i] * w);
+    x[i] = (rhs[i] - lower[i] * x[i - 1]) * inv;
   }
   for (let i = n - 2; i >= 0; i--) x[i] -= work[i + 1] * x[i + 1];
 }

@@ -21,7 +21,7 @@ import { temperatureAt } from '../series/evaluateField1D';
 
 /** Share of the tolerance given to the local time error of one step (the rest to space and accumulation). Common practice. */
 const TIME_TOLERANCE_FRACTION = 0.1;
-/** Newton update below which a stage is converged, relative to the temperature span. */
+/** Newton residual (kelvin) below which a stage is converged, relative to the temperature span. */
 const NEWTON_TOLERANCE_RELATIVE = 1e-11;
 /** Step controller: safety factor and limits on the change of step, Hairer, Norsett and Wanner, Solving ODEs I, 2nd ed., Sec. II.4 (from memory). */
 const STEP_SAFETY = 0.9;

@@ -65,6 +65,9 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   const lower = arr(), diag = arr(), upper = arr(), rhs = arr(), delta = arr(), work = arr(), explicit = arr();
   let q0 = 0, qg = 0, q1 = 0;
   let lastStepS = 0;
+  // The state before the accepted one and the step between them, for the stage predictor.
+  const tPrev = arr();
+  let prevStepS = 0;
   const maxNewtonMoveK = Math.max(highK - lowK, 1);
 
   /** F, C, e and the Jacobian V C - a dF/dT at T into (f, c, e, lower/diag/upper); returns the surface flux. */
@@ -76,12 +79,14 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
     let dRightPrev = 0;
     for (let j = 0; j < n - 1; j++) {
       const ka = k[j], kb = k[j + 1];
-      const sum = ka + kb;
-      const kf = (2 * ka * kb) / sum;
-      const dt = t[j] - t[j + 1];
-      const phi = geo[j] * kf * dt;
-      const p = geo[j] * (kf + dt * ((2 * kb * kb) / (sum * sum)) * dk[j]);
-      const q = geo[j] * (-kf + dt * ((2 * ka * ka) / (sum * sum)) * dk[j + 1]);
+      const inv = 1 / (ka + kb);
+      const kf = 2 * ka * kb * inv;
+      const g = geo[j];
+      const gdt = g * (t[j] - t[j + 1]);
+      const phi = gdt * kf;
+      // d(kf)/d(ka) = 2 kb² / (ka + kb)², d(kf)/d(kb) = 2 ka² / (ka + kb)².
+      const p = g * kf + gdt * 2 * kb * kb * inv * inv * dk[j];
+      const q = -g * kf + gdt * 2 * ka * ka * inv * inv * dk[j + 1];
       f[j] = inflowFromLeft - phi;
       diag[j] = vol[j] * c[j] - a * (dRightPrev - p);
       lower[j] = -a * dLeftPrev;
@@ -152,6 +157,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
     trialHeatOut: () => lastStepS * surfaceArea * (W * q0 + W * qg + D * q1),
     setState(temperatureK) {
       t0.set(temperatureK);
+      prevStepS = 0;
       q0 = evaluate(t0, f0, c0, e0, 0);
       for (let i = 0; i < n; i++) if (!Number.isFinite(f0[i])) return false;
       return Number.isFinite(q0);
@@ -159,9 +165,12 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
     attempt(h) {
       const a = D * h;
       // Stage 1, trapezoid to t + gamma h: V e_g - d h F_g = V e_0 + d h F_0.
+      // Predictor: the secant through the last two accepted states (the accepted state on the first step).
+      const lean = prevStepS > 0 ? (GAMMA * h) / prevStepS : 0;
       for (let i = 0; i < n; i++) {
         explicit[i] = vol[i] * e0[i] + a * f0[i];
-        tg[i] = t0[i];
+        const guess = t0[i] + lean * (t0[i] - tPrev[i]);
+        tg[i] = guess < lowK ? lowK : guess > highK ? highK : guess;
       }
       const qgNew = solveStage(tg, fg, cg, eg, a);
       if (qgNew === null) return { ok: false, reason: 'newton' };
@@ -188,6 +197,8 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       return { ok: true, errorK };
     },
     accept() {
+      tPrev.set(t0);
+      prevStepS = lastStepS;
       [t0, t1] = [t1, t0];
       [f0, f1] = [f1, f0];
       [c0, c1] = [c1, c0];
