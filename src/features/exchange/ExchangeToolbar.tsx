@@ -93,7 +93,7 @@ export function ExchangeToolbar() {
         <button type="button" onClick={() => fileInput.current?.click()} title="Open a plan file">
           Open…
         </button>
-        <input ref={fileInput} type="file" accept=".json,application/json" hidden data-testid="open-file-input" onChange={(e) => void open(e.target.files?.[0])} />
+        <input ref={fileInput} type="file" accept=".json,application/json" hidden aria-label="Plan file to open" data-testid="open-file-input" onChange={(e) => void open(e.target.files?.[0])} />
         <button type="button" className="cs-exchange-gap" onClick={() => void share()} title="Make a link that carries the plan">
           Share link
         </button>

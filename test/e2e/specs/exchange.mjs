@@ -3,6 +3,9 @@
 // named while the plan stays as it was.
 import { readFileSync } from 'node:fs';
 
+/** Start from the bundled demo plan (a version-1 file), whatever an earlier spec left in the autosave. */
+const DEMO_PLAN = readFileSync(new URL('../../../src/library/plans/demo-plan.json', import.meta.url), 'utf8');
+
 export const name = 'exchange: file and link round trips, CSV, PNG, SVG, bad files and links';
 
 async function download(page, click) {
@@ -24,6 +27,9 @@ async function openText(page, text, fileName = 'plan.coolstage.json') {
 
 export async function run({ page, baseUrl, shot, context }) {
   await page.goto(`${baseUrl}#/variants`);
+  const migrated = await openText(page, DEMO_PLAN, 'demo-plan.json');
+  if (!migrated.includes('a version-1 file, brought up to date')) throw new Error(`opening the version-1 demo plan: ${migrated}`);
+  await page.getByTestId('exchange-notice').getByRole('button', { name: 'Dismiss' }).click();
   await page.getByTestId('add-variant').click();
   await page.getByTestId('variant-v1').waitFor();
   await waitForResults(page);

@@ -1,11 +1,19 @@
 // Variants in Chromium: copy the demo plan, swap its last air stage for a liquid bath, and check
 // that the comparison table has figures for both plans and that the variant's curves are drawn
 // over the main plan's, named in the legend and drawn with their own dash pattern.
+import { readFileSync } from 'node:fs';
+
+/** Start from the bundled demo plan (a version-1 file), whatever an earlier spec left in the autosave. */
+const DEMO_PLAN = readFileSync(new URL('../../../src/library/plans/demo-plan.json', import.meta.url), 'utf8');
+
 export const name = 'variants: swap an air stage for a liquid bath, compare and overlay';
 
 export async function run({ page, baseUrl, shot }) {
   await page.goto(`${baseUrl}#/variants`);
   await page.getByTestId('variants-screen').waitFor();
+  await page.getByTestId('open-file-input').setInputFiles({ name: 'demo-plan.json', mimeType: 'application/json', buffer: Buffer.from(DEMO_PLAN) });
+  await page.getByTestId('exchange-notice').getByText('a version-1 file, brought up to date').waitFor();
+  if ((await page.locator('[data-testid^="variant-v"]').count()) !== 0) throw new Error('the demo plan opened with variants');
   await page.getByTestId('add-variant').click();
   const card = page.getByTestId('variant-v1');
   await card.waitFor();
