@@ -7,6 +7,8 @@ export interface PropertyModel {
   isConstant: boolean;
   /** Smallest and largest value over the given temperature range (for the variation warning). */
   rangeOver(lowK: number, highK: number): { min: number; max: number };
+  /** Table temperatures where the piecewise-linear property changes slope (none when constant), K: ODE solvers stop their steps there. */
+  breakpointsK?: readonly number[];
 }
 
 export interface MaterialModel {
@@ -20,13 +22,14 @@ export interface MaterialModel {
 }
 
 function propertyModel(p: PropertyInput): PropertyModel {
-  if (typeof p === 'number') return { at: () => p, isConstant: true, rangeOver: () => ({ min: p, max: p }) };
+  if (typeof p === 'number') return { at: () => p, isConstant: true, rangeOver: () => ({ min: p, max: p }), breakpointsK: [] };
   const xs = Float64Array.from(p.table, (r) => r[0]);
   const ys = Float64Array.from(p.table, (r) => r[1]);
   const at = (t: number) => interpolateTable(xs, ys, t);
   return {
     at,
     isConstant: false,
+    breakpointsK: Array.from(xs),
     rangeOver(lowK, highK) {
       // Extremes of a piecewise-linear function lie at the ends or at table rows inside.
       let min = Math.min(at(lowK), at(highK));

@@ -11,6 +11,8 @@ export interface SurfaceBoundary {
   /** h at the given surface temperature, W/(m² K). */
   convectionCoefficient(surfaceK: number): number;
   hIsConstant: boolean;
+  /** Surface temperatures where a tabulated h changes slope (none when constant), K: ODE solvers stop their steps there. */
+  hBreakpointsK?: readonly number[];
   radiation: { emissivity: number; surroundingsK: number } | null;
   /** Heat flux leaving the surface, W/m², positive when the part loses heat. */
   fluxOut(surfaceK: number): number;
@@ -43,6 +45,7 @@ export function surfaceBoundary(medium: Medium): SurfaceBoundary {
     mediumK,
     convectionCoefficient: h,
     hIsConstant: ht.kind === 'constant',
+    hBreakpointsK: ht.kind === 'constant' ? [] : ht.rows.map((r) => r[0]),
     radiation: rad,
     // Newton's law of cooling plus the grey-body exchange eps*sigma*(Ts^4 - Tsur^4),
     // Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., Eqs. 1.3a and 1.7 (from memory).
