@@ -87,12 +87,14 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   }
 
   // Material table over every temperature the stage can reach (maximum principle).
-  let lowK = Math.min(boundary.mediumK, boundary.radiation?.surroundingsK ?? boundary.mediumK);
-  let highK = Math.max(boundary.mediumK, boundary.radiation?.surroundingsK ?? boundary.mediumK);
+  let fieldLowK = Infinity;
+  let fieldHighK = -Infinity;
   for (let p = 0; p < u.length; p++) {
-    lowK = Math.min(lowK, u[p]);
-    highK = Math.max(highK, u[p]);
+    fieldLowK = Math.min(fieldLowK, u[p]);
+    fieldHighK = Math.max(fieldHighK, u[p]);
   }
+  const lowK = Math.min(fieldLowK, boundary.mediumK, boundary.radiation?.surroundingsK ?? boundary.mediumK);
+  const highK = Math.max(fieldHighK, boundary.mediumK, boundary.radiation?.surroundingsK ?? boundary.mediumK);
   const table = tabulateMaterial(material, lowK - TABLE_MARGIN_K, highK + TABLE_MARGIN_K);
   const stepper = douglasAdiStepper(grid, table, material.isConstant, boundary, problem.toleranceK * PICARD_SHARE_OF_TOLERANCE);
   const equilibriumK = equilibriumTemperature(boundary);
@@ -101,8 +103,9 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   let startGap = 0;
   if (end.kind === 'point-temperature' && targetProbe) {
     targetK = end.temperatureK;
-    const fieldLow = Math.min(lowK, equilibriumK);
-    const fieldHigh = Math.max(highK, equilibriumK);
+    // Maximum principle: the flux out has the sign of Ts - T_eq, so the field stays between its start extremes and T_eq.
+    const fieldLow = Math.min(fieldLowK, equilibriumK);
+    const fieldHigh = Math.max(fieldHighK, equilibriumK);
     if (targetK < fieldLow || targetK > fieldHigh) {
       return { ok: false, code: 'target-unreachable', message: `The ${end.point} cannot reach ${targetK.toFixed(2)} K: the part stays between ${fieldLow.toFixed(2)} K and ${fieldHigh.toFixed(2)} K in this medium (it tends to ${equilibriumK.toFixed(2)} K).` };
     }
@@ -182,7 +185,7 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   }
 
   const stageS = timeS;
-  const sampleTimes = Float64Array.from({ length: sampleCount }, (_, i) => (stageS * i) / (sampleCount - 1));
+  const sampleTimes = Float64Array.from({ length: sampleCount }, (_, i) => (i === sampleCount - 1 ? stageS : (stageS * i) / (sampleCount - 1)));
   const temperaturesK: Partial<Record<PointId, Float64Array>> = {};
   probes.forEach((p, i) => {
     temperaturesK[p.id] = stageS > 0 ? resampleMonotone(historyS, history[i], sampleTimes) : new Float64Array(sampleCount).fill(history[i][0]);

@@ -31,6 +31,8 @@ const SCAN_GROWTH = 1.25;
 const MAX_STAGE_S = 1e8;
 /** Amplitudes below this fraction of the largest are dropped from the end field. */
 const NEGLIGIBLE_AMPLITUDE = 1e-15;
+/** Samples per axis of the start field's range check. */
+const RANGE_SAMPLES = 9;
 const UNIT_FACTOR: SeriesFactor = { offset: 1, eigenvalues: new Float64Array(0), amplitudes: new Float64Array(0) };
 
 interface Probe {
@@ -131,9 +133,13 @@ export const solveProductStage: StageSolver = (problem): StageOutcome => {
     }
     const scan = build(scanStartS);
     if (!scan) return { ok: false, code: 'not-applicable', message: 'The series would need too many terms at the start of this stage.' };
-    const bound0 = start.terms.length === 0 ? Math.abs(start.offsetK - mediumK) : scan.excessBound(0);
-    if (Math.abs(targetK - mediumK) > bound0) {
-      return { ok: false, code: 'target-unreachable', message: `The ${end.point} cannot reach ${targetK.toFixed(2)} K: in a medium at ${mediumK.toFixed(2)} K the part stays within ${bound0.toPrecision(4)} K of it.` };
+    // Maximum principle: the field stays between its start extremes and T_inf (sampled on RANGE_SAMPLES per axis,
+    // the centre, faces, edges and corners among them).
+    const range = startRange(start, axisLengthM);
+    const lowK = Math.min(range.lowK, mediumK);
+    const highK = Math.max(range.highK, mediumK);
+    if (targetK < lowK || targetK > highK) {
+      return { ok: false, code: 'target-unreachable', message: `The ${end.point} cannot reach ${targetK.toFixed(2)} K: in a medium at ${mediumK.toFixed(2)} K the part stays between ${lowK.toFixed(2)} K and ${highK.toFixed(2)} K.` };
     }
     if (gap0 === 0) durationS = 0;
     else {
@@ -156,7 +162,7 @@ export const solveProductStage: StageSolver = (problem): StageOutcome => {
   }
 
   const sampleCount = Math.max(2, problem.sampleCount);
-  const timeS = Float64Array.from({ length: sampleCount }, (_, i) => (durationS * i) / (sampleCount - 1));
+  const timeS = Float64Array.from({ length: sampleCount }, (_, i) => (i === sampleCount - 1 ? durationS : (durationS * i) / (sampleCount - 1)));
   const series = build(durationS > 0 ? timeS[1] : scanStartS);
   if (!series) return { ok: false, code: 'not-applicable', message: `The stage's first sample (t = ${timeS[1].toPrecision(3)} s) is too early for the series; use more time or the finite-volume method.` };
   const temperaturesK: Partial<Record<PointId, Float64Array>> = {};
@@ -188,6 +194,25 @@ export const solveProductStage: StageSolver = (problem): StageOutcome => {
     },
   };
 };
+
+/** Lowest and highest start temperature on an even grid of RANGE_SAMPLES per axis. */
+function startRange(start: ProductField, axisLengthM: number[]): { lowK: number; highK: number } {
+  let lowK = Infinity;
+  let highK = -Infinity;
+  const dims = axisLengthM.length;
+  const position = new Array<number>(dims);
+  for (let k = 0; k < RANGE_SAMPLES ** dims; k++) {
+    let rest = k;
+    for (let d = 0; d < dims; d++) {
+      position[d] = (axisLengthM[d] * (rest % RANGE_SAMPLES)) / (RANGE_SAMPLES - 1);
+      rest = Math.floor(rest / RANGE_SAMPLES);
+    }
+    const t = productFieldTemperatureAt(start, position);
+    lowK = Math.min(lowK, t);
+    highK = Math.max(highK, t);
+  }
+  return { lowK, highK };
+}
 
 /** b_n exp(-lambda_n² Fo), with negligible trailing terms dropped. */
 function decayedFactor(lambdas: Float64Array, amplitudes: Float64Array, fo: number): SeriesFactor {
