@@ -9,7 +9,7 @@
 // Expected error: reported temperatures within toleranceK of the exact answer (checked against the exact series
 // in test/unit/finite-volume); energy balance to the Newton tolerance (relative error well below 1e-6).
 import type { StageOutcome, StageProblem, StageSolution } from '../stageProblem';
-import type { Field } from '../../fields';
+import type { Field1D } from '../../fields';
 import type { PointId } from '@/schema/planSchema';
 import { buildVolumeGrid, gridOnNodes, areaExponentOf, type VolumeGrid } from './buildVolumeGrid';
 import { tabulateMaterial, evaluateMaterial } from './tabulateMaterial';
@@ -36,6 +36,8 @@ const MAX_TARGET_TIME_S = 1e9;
 const MAX_STEPS = 500_000;
 /** Margin of the property table beyond the temperatures the stage can reach, K. */
 const TABLE_MARGIN_K = 5;
+/** Positions at which a series start field is scanned for its range (the table margin covers what falls between). */
+const RANGE_SCAN_POINTS = 65;
 
 /** Test and benchmark hooks: a fixed grid or a fixed time step instead of the automatic ones. */
 export interface FiniteVolumeOverrides {
@@ -89,11 +91,13 @@ function storedEnergy(grid: VolumeGrid, e: Float64Array): number {
   return s;
 }
 
-function fieldRange(field: Field, probeNodes: Float64Array): { min: number; max: number } {
+/** Smallest and largest start temperature (a series field is scanned at RANGE_SCAN_POINTS positions). */
+function fieldRange(field: Field1D): { min: number; max: number } {
   if (field.kind === 'uniform') return { min: field.temperatureK, max: field.temperatureK };
-  const values = field.kind === 'grid-1d' ? field.temperaturesK : probeNodes;
   let min = Infinity, max = -Infinity;
-  for (const v of values) {
+  const count = field.kind === 'grid-1d' ? field.temperaturesK.length : RANGE_SCAN_POINTS;
+  for (let i = 0; i < count; i++) {
+    const v = field.kind === 'grid-1d' ? field.temperaturesK[i] : temperatureAt(field, (field.lengthM * i) / (count - 1));
     if (v < min) min = v;
     if (v > max) max = v;
   }
@@ -141,10 +145,7 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
   const mediumK = boundary.mediumK;
   const surroundingsK = boundary.radiation ? boundary.radiation.surroundingsK : mediumK;
   const equilibriumK = equilibriumTemperature(boundary);
-  const probeX = new Float64Array(65);
-  for (let i = 0; i < probeX.length; i++) probeX[i] = (lengthM * i) / (probeX.length - 1);
-  const probeT = start.kind === 'series-1d' ? probeX.map((x) => temperatureAt(start, x)) : probeX;
-  const range = fieldRange(start, probeT);
+  const range = fieldRange(start);
   const reachLowK = Math.min(range.min, mediumK, surroundingsK);
   const reachHighK = Math.max(range.max, mediumK, surroundingsK);
   const spanK = Math.max(reachHighK - reachLowK, toleranceK);
