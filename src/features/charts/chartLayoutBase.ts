@@ -1,5 +1,10 @@
 // Layout settings shared by every chart view: fonts, margins, grid, legend under the plot.
-import type { Layout } from 'plotly.js';
+import type { Layout, Legend } from 'plotly.js';
+
+/** Room under the plot for tick labels and the axis title. */
+const AXIS_TITLE_MARGIN_PX = 56;
+/** Room under that for two rows of legend entries. */
+const LEGEND_BELOW_PX = 44;
 
 export const CHART_FONT_FAMILY = 'system-ui, -apple-system, "Segoe UI", Roboto, sans-serif';
 
@@ -10,12 +15,17 @@ export function chartLayoutBase(xTitle: string, yTitle: string, legendPlace: Leg
   return {
     font: { family: CHART_FONT_FAMILY, size: 12, color: '#222' },
     // Right margin room for the upright mode bar, so it never sits on a legend above the plot.
-    margin: { t: 36, r: 40, b: 56, l: 64 },
+    margin: { t: 36, r: 40, b: legendPlace === 'below' ? AXIS_TITLE_MARGIN_PX + LEGEND_BELOW_PX : AXIS_TITLE_MARGIN_PX, l: 64 },
     modebar: { orientation: 'v' },
     paper_bgcolor: '#ffffff',
     plot_bgcolor: '#ffffff',
     hovermode: 'closest',
-    legend: legendPlace === 'below' ? { orientation: 'h', x: 0, y: -0.2, yanchor: 'top' } : { orientation: 'h', x: 0, y: 1.02, yanchor: 'bottom' },
+    // Below: pinned to the bottom of the chart box (not the plot), under a margin that holds the axis title,
+    // so it never meets the title whatever the chart's height.
+    legend:
+      legendPlace === 'below'
+        ? ({ orientation: 'h', x: 0, y: 0, yanchor: 'bottom', yref: 'container' } as Partial<Legend>)
+        : { orientation: 'h', x: 0, y: 1.02, yanchor: 'bottom' },
     xaxis: { title: { text: xTitle }, gridcolor: '#e3e3e3', zeroline: false, linecolor: '#999', showline: true, ticks: 'outside' },
     yaxis: { title: { text: yTitle }, gridcolor: '#e3e3e3', zeroline: false, linecolor: '#999', showline: true, ticks: 'outside' },
   };
