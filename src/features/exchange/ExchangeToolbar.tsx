@@ -1,6 +1,6 @@
 // The workbench's exchange tools: save and open plan files, share a link, export CSV, PNG and SVG,
 // (the Variants and Stage sheet screens are in the shell's screen links). Results are read from the store, never computed here.
-import { useRef, useState, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { useAppStore } from '@/state/useAppStore';
 import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { planFileToText } from '@/schema/planFileToText';
@@ -16,6 +16,9 @@ import { PlanIssueList } from './PlanIssueList';
 import { LinkOpenPrompt } from './LinkOpenPrompt';
 import './ExchangeToolbar.css';
 
+/** A plain "done" line goes away by itself after this long; problems and links stay until dismissed. */
+const DONE_NOTICE_MS = 8000;
+
 /** Exported chart size: wide enough for a slide, PNG at twice the pixels for print. */
 const EXPORT_CHART = { widthPx: 1100, heightPx: 560, scale: 2 };
 
@@ -30,6 +33,12 @@ export function ExchangeToolbar() {
   const [notice, setNotice] = useState<Notice | null>(null);
   const [csvStage, setCsvStage] = useState('all');
   const main = results[MAIN_PLAN_ID];
+
+  useEffect(() => {
+    if (notice?.kind !== 'done') return;
+    const timer = setTimeout(() => setNotice(null), DONE_NOTICE_MS);
+    return () => clearTimeout(timer);
+  }, [notice]);
 
   const save = () => {
     downloadBlob(safeFileName(document.main.name, 'coolstage.json'), new Blob([planFileToText(document, 'degC')], { type: 'application/json' }));
