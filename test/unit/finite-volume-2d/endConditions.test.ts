@@ -8,7 +8,7 @@ import { solveProductStage } from '@/engine/methods/product/solveProductStage';
 import { maxPointSpreadK } from '@/engine/methods/finite-volume-2d/maxPointSpreadK';
 import { finiteFieldTemperatureAt } from '@/engine/methods/finite-volume-2d/finiteFieldTemperatureAt';
 import type { StageSolver } from '@/engine/methods/stageProblem';
-import type { PointId } from '@/schema/planSchema';
+import type { PointId, Shape } from '@/schema/planSchema';
 import { convection, curveOf, finiteProblem, flatBar, shortCylinder, smallBlock, solved } from './finiteShapeFixture';
 
 const OIL = convection(333, 800);
@@ -23,7 +23,7 @@ const CROSSING_RELATIVE = 5e-3;
 const solvers: [string, StageSolver][] = [['finite volume', solveFiniteVolume2DStage], ['product', solveProductStage]];
 
 describe('point-temperature ends', () => {
-  const targets: [string, typeof shortCylinder, PointId, number][] = [
+  const targets: [string, Shape, PointId, number][] = [
     ['short cylinder', shortCylinder, 'centre', 700],
     ['short cylinder', shortCylinder, 'edge', 500],
     ['bar', flatBar, 'face-y', 600],

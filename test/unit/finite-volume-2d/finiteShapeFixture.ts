@@ -35,9 +35,9 @@ export const boilingBath: Medium = {
 
 export const radiatingAir: Medium = { name: 'test air', temperature: 300, heatTransfer: { kind: 'constant', hWPerM2K: 12 }, radiation: { emissivity: 0.8 } };
 
-export const shortCylinder: Shape = { kind: 'short-cylinder', radiusM: 0.025, halfLengthM: 0.04 };
-export const flatBar: Shape = { kind: 'bar', halfWidthM: 0.03, halfHeightM: 0.015 };
-export const smallBlock: Shape = { kind: 'block', halfLengthM: 0.04, halfWidthM: 0.03, halfHeightM: 0.02 };
+export const shortCylinder = { kind: 'short-cylinder', radiusM: 0.025, halfLengthM: 0.04 } satisfies Shape;
+export const flatBar = { kind: 'bar', halfWidthM: 0.03, halfHeightM: 0.015 } satisfies Shape;
+export const smallBlock = { kind: 'block', halfLengthM: 0.04, halfWidthM: 0.03, halfHeightM: 0.02 } satisfies Shape;
 
 export function finiteProblem(args: { shape: Shape; material?: Material; medium: Medium; start?: Field; end: StageProblem['end']; toleranceK?: number; sampleCount?: number; depthM?: number; signal?: AbortSignal }): StageProblem {
   return {
