@@ -74,5 +74,7 @@ export interface PlanResult {
   /** The stage that could not be computed, if any; stages after it are not run. */
   failure: FailedStage | null;
   totalDurationS: number;
+  /** False for a quick pass that skipped the second-method check of each stage (crossCheck null per stage). */
+  crossChecked: boolean;
   warnings: EngineWarning[];
 }

@@ -32,6 +32,8 @@ export const DEFAULT_SURFACE_EMISSIVITY = 0.8;
 
 export interface RunPlanOptions {
   toleranceK?: number;
+  /** Check every stage by a second method (default). A quick first pass for interactive editing may skip it. */
+  crossCheck?: boolean;
   signal?: AbortSignal;
   onProgress?: (fraction: number) => void;
 }
@@ -73,7 +75,7 @@ export function runPlan(plan: PlanK, options: RunPlanOptions = {}): PlanResult {
   for (let index = 0; index < plan.stages.length; index++) {
     if (options.signal?.aborted) throw abortError();
     const stage = plan.stages[index];
-    const outcome = runStage(stage, index, field, timeS, { geometry, material, toleranceK, signal: options.signal, emissivity: plan.part.material.surfaceEmissivity, solvers: geometry.oneD ? SOLVERS_1D : SOLVERS_FINITE });
+    const outcome = runStage(stage, index, field, timeS, { geometry, material, toleranceK, signal: options.signal, crossCheck: options.crossCheck ?? true, emissivity: plan.part.material.surfaceEmissivity, solvers: geometry.oneD ? SOLVERS_1D : SOLVERS_FINITE });
     if (!outcome.ok) {
       if (outcome.aborted) throw abortError();
       failure = { index, name: stage.name, code: outcome.code, message: outcome.message };
@@ -92,6 +94,7 @@ export function runPlan(plan: PlanK, options: RunPlanOptions = {}): PlanResult {
     stages,
     failure,
     totalDurationS: timeS,
+    crossChecked: options.crossCheck ?? true,
     warnings: stages.flatMap((s) => s.warnings),
   };
 }
@@ -101,6 +104,7 @@ interface StageContext {
   material: MaterialModel;
   toleranceK: number;
   signal?: AbortSignal;
+  crossCheck: boolean;
   emissivity?: number;
   solvers: Record<MethodId, StageSolver>;
 }
@@ -150,10 +154,10 @@ function runStage(stage: Stage, index: number, start: Field, startTimeS: number,
   const sol: StageSolution = primary.solution;
 
   const crossTolerance = selection.crossCheck.refined ? toleranceK / 10 : toleranceK;
-  const cross = ctx.solvers[selection.crossCheck.method](problem({ end: { kind: 'duration', seconds: Math.max(sol.durationS, Number.MIN_VALUE) }, toleranceK: crossTolerance, propertyTemperatureK }));
+  const cross = !ctx.crossCheck ? null : ctx.solvers[selection.crossCheck.method](problem({ end: { kind: 'duration', seconds: Math.max(sol.durationS, Number.MIN_VALUE) }, toleranceK: crossTolerance, propertyTemperatureK }));
   // Both methods meet the tolerance, so they may differ by twice it; lumped is allowed its accuracy limit.
   const allowedK = selection.method === 'lumped' ? lumpedAccuracyLimitK : 2 * toleranceK;
-  const crossCheck = cross.ok && sol.durationS > 0 ? { method: cross.solution.method, maxDifferenceK: maxSampleDifference(sol.samples, cross.solution.samples), toleranceK: allowedK } : null;
+  const crossCheck = cross?.ok && sol.durationS > 0 ? { method: cross.solution.method, maxDifferenceK: maxSampleDifference(sol.samples, cross.solution.samples), toleranceK: allowedK } : null;
 
   const endK = fieldAtPoints(sol.endField, geometry, depthM);
   const measures = curveMeasures(sol.samples);

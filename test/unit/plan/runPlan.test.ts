@@ -55,6 +55,14 @@ describe('runPlan chaining', () => {
     expect(one.stages[0].warnings.map((w) => w.ruleId)).not.toContain('cross-check-difference');
   });
 
+  it('gives the same stage results without the cross-check in a quick pass', () => {
+    const quick = runPlan(plate([bath(4000, { kind: 'duration', seconds: 80 })]), { crossCheck: false });
+    expect(quick.crossChecked).toBe(false);
+    expect(quick.stages[0].crossCheck).toBeNull();
+    expect(quick.stages[0].endK).toEqual(one.stages[0].endK);
+    expect(one.crossChecked).toBe(true);
+  });
+
   it('accounts heat removed as rho c V (mean drop), per m² of face for a plate', () => {
     const s = one.stages[0];
     const expected = 7800 * 460 * 0.02 * (s.startK.mean! - s.endK.mean!);
