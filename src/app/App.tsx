@@ -1,6 +1,6 @@
 // The shell: header (name, screens, edit history, units, a toolbar for other features),
 // engine status, notices and the safety reminder, then the current screen.
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import { UnitToggle } from '@/features/units/UnitToggle';
 import { ExchangeToolbar } from '@/features/exchange/ExchangeToolbar';
 import { TextField } from '@/features/part/TextField';
@@ -77,7 +77,9 @@ function Shell({ workbench }: { workbench: Workbench }) {
       <SafetyNotice />
       <main>
         <h1 className="sr-only">{screen.title}</h1>
-        <screen.Component />
+        <Suspense fallback={<p className="stage-muted">Opening {screen.title.toLowerCase()}…</p>}>
+          <screen.Component />
+        </Suspense>
       </main>
     </>
   );

@@ -1,10 +1,13 @@
 // The workbench: the stage chain across the top; part on the left, curves in the middle,
 // the selected stage's settings on the right, its report under the curves.
-import { CurvesPanel } from './CurvesPanel';
+import { Suspense, lazy } from 'react';
 import { PartPanel } from './PartPanel';
 import { StageChainPanel } from './StageChainPanel';
 import { StageReportPanel } from './StageReportPanel';
 import { StageSettingsPanel } from './StageSettingsPanel';
+
+// The charts load with plotly, after the inputs and tables are on screen.
+const CurvesPanel = lazy(() => import('./CurvesPanel').then((m) => ({ default: m.CurvesPanel })));
 
 export function WorkbenchScreen() {
   return (
@@ -16,7 +19,9 @@ export function WorkbenchScreen() {
         <PartPanel />
       </div>
       <div className="area-curves">
-        <CurvesPanel />
+        <Suspense fallback={<section className="panel"><h2>Curves</h2><p className="stage-muted">Loading the charts…</p></section>}>
+          <CurvesPanel />
+        </Suspense>
         <StageReportPanel />
       </div>
       <div className="area-stage">

@@ -1,8 +1,7 @@
-// The screens of the shell, by hash route. A new screen (e.g. the stage sheet at #/sheet) adds one entry.
-import type { ComponentType } from 'react';
+// The screens of the shell, by hash route. A new screen adds one entry. Screens other than the
+// workbench load on first visit, so the first screen ships less JavaScript.
+import { lazy, type ComponentType } from 'react';
 import { WorkbenchScreen } from './WorkbenchScreen';
-import { VariantsScreen } from '@/features/variants/VariantsScreen';
-import { SheetPage } from '@/features/sheet/SheetPage';
 
 export interface ScreenEntry {
   /** The hash the screen lives at, e.g. "#/". */
@@ -10,6 +9,9 @@ export interface ScreenEntry {
   title: string;
   Component: ComponentType;
 }
+
+const VariantsScreen = lazy(() => import('@/features/variants/VariantsScreen').then((m) => ({ default: m.VariantsScreen })));
+const SheetPage = lazy(() => import('@/features/sheet/SheetPage').then((m) => ({ default: m.SheetPage })));
 
 export const SCREENS: readonly ScreenEntry[] = [
   { hash: '#/', title: 'Workbench', Component: WorkbenchScreen },
