@@ -7,7 +7,8 @@
 //   COOLSTAGE_E2E_ONLY=<part of a spec name>   run only matching specs
 //   COOLSTAGE_E2E_DIST=<dir>                   serve another build output directory
 import { spawn } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
+import { createServer } from 'node:net';
 import { mkdir, mkdtemp, readdir, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join, dirname } from 'node:path';
@@ -17,8 +18,6 @@ const HERE = dirname(fileURLToPath(import.meta.url));
 const ROOT = join(HERE, '..', '..');
 const OUT = join(HERE, 'out');
 const CHROMIUM = process.env.COOLSTAGE_CHROMIUM ?? '/usr/bin/chromium';
-const PORT = Number(process.env.COOLSTAGE_E2E_PORT ?? 4173);
-const BASE_URL = `http://127.0.0.1:${PORT}/`;
 const SERVER_START_TIMEOUT_MS = 20_000;
 const SPEC_TIMEOUT_MS = 60_000;
 const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
@@ -40,6 +39,21 @@ if (!existsSync(join(distDir, 'index.html'))) {
 
 const { chromium } = await import('playwright-core');
 
+/** A port nobody listens on now (other checkouts may run their own servers on the usual ones). */
+function freePort() {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const { port } = probe.address();
+      probe.close(() => resolve(port));
+    });
+  });
+}
+const PORT = Number(process.env.COOLSTAGE_E2E_PORT ?? (await freePort()));
+const BASE_URL = `http://127.0.0.1:${PORT}/`;
+const EXPECTED_INDEX = readFileSync(join(distDir, 'index.html'), 'utf8');
+
 function startServer() {
   const child = spawn('npx', ['vite', 'preview', '--host', '127.0.0.1', '--port', String(PORT), '--strictPort', '--outDir', distDir], {
     cwd: ROOT,
@@ -58,7 +72,8 @@ async function waitForServer(server) {
     if (server.child.exitCode !== null) throw new Error(`vite preview exited early:\n${server.log()}`);
     try {
       const r = await fetch(BASE_URL);
-      if (r.ok) return;
+      // Our own build, not another server that happens to hold the port.
+      if (r.ok && (await r.text()) === EXPECTED_INDEX) return;
     } catch {
       /* not up yet */
     }

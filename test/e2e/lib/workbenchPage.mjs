@@ -1,0 +1,42 @@
+// Helpers the workbench specs share: open a clean workbench, wait for fresh results, read the chain and the chart.
+
+/** Open the app with nothing saved (the demo plan) and wait for its first results and chart. */
+export async function openCleanWorkbench(page, baseUrl) {
+  await page.goto(baseUrl);
+  await page.evaluate(() => localStorage.clear());
+  await page.reload();
+  await waitForResults(page);
+  await waitForChart(page);
+}
+
+export async function waitForResults(page) {
+  await page.getByText(/Results up to date/).waitFor({ timeout: 20_000 });
+}
+
+const HISTORY_TRACE = 'figure[aria-label^="Temperature against time"] .scatterlayer .trace path.js-line';
+
+export async function waitForChart(page) {
+  await page.locator(HISTORY_TRACE).first().waitFor({ timeout: 20_000 });
+}
+
+/** The drawn path of every temperature-history trace, to tell whether the plotted curves changed. */
+export async function historyPaths(page) {
+  return page.locator(HISTORY_TRACE).evaluateAll((paths) => paths.map((p) => p.getAttribute('d') ?? ''));
+}
+
+export function stageBlocks(page) {
+  return page.getByRole('listbox', { name: 'Stages in order' }).getByRole('option');
+}
+
+export async function stageNames(page) {
+  return stageBlocks(page).evaluateAll((els) => els.map((el) => el.querySelector('.stage-title')?.textContent?.replace(/^\d+\s*/, '').replace(/ \(selected\)$/, '').trim()));
+}
+
+/** The "takes ..." text of a block (index from 0). */
+export async function stageDurationText(page, index) {
+  return (await stageBlocks(page).nth(index).locator('.stage-duration').textContent())?.trim();
+}
+
+export function assert(condition, message) {
+  if (!condition) throw new Error(message);
+}
