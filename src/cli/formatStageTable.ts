@@ -1,5 +1,6 @@
 // The readable per-stage table of the headless command (temperatures in degC, times in s).
 import type { PlanResult, StageResult } from '@/engine/plan/planResult';
+import type { PointId } from '@/schema/planSchema';
 
 const C = (k: number | undefined) => (k === undefined ? '-' : (k - 273.15).toFixed(1));
 const g = (x: number, d = 3) => (x === 0 ? '0' : Math.abs(x) < 1e-3 || Math.abs(x) >= 1e5 ? x.toExponential(1) : Number(x.toPrecision(d)).toString());
@@ -9,7 +10,7 @@ function pad(rows: string[][]): string {
   return rows.map((r) => r.map((cell, c) => (c <= 2 ? cell.padEnd(widths[c]) : cell.padStart(widths[c]))).join('  ')).join('\n');
 }
 
-function row(s: StageResult): string[] {
+function row(s: StageResult, pointIds: PointId[]): string[] {
   return [
     String(s.index + 1),
     s.name,
@@ -18,10 +19,9 @@ function row(s: StageResult): string[] {
     g(s.biot.series.value),
     g(s.fourierEnd),
     g(s.durationS, 4),
-    `${C(s.startK.centre)} > ${C(s.endK.centre)}`,
-    `${C(s.startK.surface ?? s.startK.corner)} > ${C(s.endK.surface ?? s.endK.corner)}`,
-    `${C(s.startK.mean)} > ${C(s.endK.mean)}`,
+    ...pointIds.map((id) => `${C(s.startK[id])} > ${C(s.endK[id])}`),
     g(s.heatRemovedJ / 1000, 4),
+    g(s.maxPointSpreadK, 3),
     s.crossCheck ? `${g(s.crossCheck.maxDifferenceK, 2)} (${s.crossCheck.method})` : '-',
     s.energyRelativeError === null ? '-' : g(s.energyRelativeError, 2),
     String(s.warnings.length),
@@ -29,8 +29,16 @@ function row(s: StageResult): string[] {
 }
 
 export function formatStageTable(result: PlanResult): string {
-  const head = ['#', 'stage', 'method', 'Bi(Lc)', 'Bi(L/r0)', 'Fo end', 'time s', 'centre °C', 'surface °C', 'mean °C', `heat kJ`, 'x-check K', 'energy err', 'warn'];
-  const lines = [`${result.planName}: ${result.stages.length} stage(s), ${g(result.totalDurationS, 4)} s in all; heat ${result.geometry.basis}`, '', pad([head, ...result.stages.map(row)]), ''];
+  const pointIds = result.points.map((p) => p.id);
+  const head = ['#', 'stage', 'method', 'Bi(Lc)', 'Bi(L/r0)', 'Fo end', 'time s', ...pointIds.map((id) => `${id} °C`), 'heat kJ', 'max spread K', 'x-check K', 'energy err', 'warn'];
+  const legend = result.points.map((p) => `${p.id} = ${p.label}`).join('; ');
+  const lines = [
+    `${result.planName}: ${result.stages.length} stage(s), ${g(result.totalDurationS, 4)} s in all; heat ${result.geometry.basis}`,
+    `points: ${legend}; start > end of each stage`,
+    '',
+    pad([head, ...result.stages.map((s) => row(s, pointIds))]),
+    '',
+  ];
   for (const s of result.stages) {
     lines.push(`${s.index + 1} ${s.name}: ${s.methodReason}`);
     for (const w of s.warnings) lines.push(`   [${w.severity}] ${w.message} ${w.advice}`);

@@ -35,6 +35,20 @@ describe('npm run plan', () => {
     expect(s0.curves.timeS.length).toBe(s0.curves.temperaturesK.centre.length);
   });
 
+  it('reports centre, face, rim and mean temperatures per stage for a finite cylinder', () => {
+    const r = run('test/fixtures/plans/short-cylinder-hub.json', '--json');
+    expect(r.status, r.stderr).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.points.map((p: { id: string }) => p.id)).toEqual(['centre', 'face-x', 'face-z', 'edge', 'mean']);
+    for (const s of out.stages) {
+      for (const id of ['centre', 'face-x', 'face-z', 'edge', 'mean']) expect(s.endK[id]).toBeGreaterThan(273);
+      // The rim cools fastest: it sees two faces (Carslaw and Jaeger, Sec. 1.15 product solutions, from memory).
+      expect(s.endK.edge).toBeLessThan(s.endK['face-x']);
+      expect(s.maxPointSpreadK).toBeGreaterThan(0);
+      expect(s.crossCheck).not.toBeNull();
+    }
+  });
+
   it('names the field of a bad file and exits 1 without a stack trace', () => {
     const plan = JSON.parse(readFileSync('test/fixtures/plans/minimal-plate.json', 'utf8'));
     plan.stages[0].medium.heatTransfer.hWPerM2K = -5;
