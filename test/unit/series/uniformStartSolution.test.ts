@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { SeriesGeometry } from '@/engine/geometry/geometry';
 import { uniformStartHeatFraction, uniformStartMeanTheta, uniformStartTheta } from '@/engine/methods/series/uniformStartSolution';
-import { oneTermMeanTheta, oneTermTheta } from '@/engine/methods/series/oneTermApproximation';
+import { oneTermApproximation } from '@/engine/methods/series/oneTermApproximation';
 import { largestLumpedSpreadFraction, lumpedSpreadFraction } from '@/engine/methods/series/lumpedSpreadFraction';
 
 const GEOMETRIES: SeriesGeometry[] = ['slab', 'cylinder', 'sphere'];
@@ -73,14 +73,15 @@ describe('uniform-start exact series', () => {
     const surfaceErrors: string[] = [];
     for (const g of GEOMETRIES) {
       for (const bi of [0.1, 1, 10, 100]) {
+        const oneTerm = oneTermApproximation(g, bi);
         for (const fo of [0.21, 0.3, 0.6, 1.5]) {
           const exactC = uniformStartTheta(g, bi, 0, fo);
           const exactM = uniformStartMeanTheta(g, bi, fo);
-          const c = Math.abs(oneTermTheta(g, bi, 0, fo) / exactC - 1);
-          const m = Math.abs(oneTermMeanTheta(g, bi, fo) / exactM - 1);
+          const c = Math.abs(oneTerm.theta(0, fo) / exactC - 1);
+          const m = Math.abs(oneTerm.meanTheta(fo) / exactM - 1);
           expect(c, `${g} Bi=${bi} Fo=${fo}: centre one-term rel. error ${c}`).toBeLessThan(ONE_TERM_RELATIVE);
           expect(m, `${g} Bi=${bi} Fo=${fo}: mean one-term rel. error ${m}`).toBeLessThan(ONE_TERM_RELATIVE);
-          if (fo === 0.21) surfaceErrors.push(`${g} Bi=${bi}: ${(Math.abs(oneTermTheta(g, bi, 1, fo) - uniformStartTheta(g, bi, 1, fo))).toExponential(2)}`);
+          if (fo === 0.21) surfaceErrors.push(`${g} Bi=${bi}: ${(Math.abs(oneTerm.theta(1, fo) - uniformStartTheta(g, bi, 1, fo))).toExponential(2)}`);
         }
       }
     }

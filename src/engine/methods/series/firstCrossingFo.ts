@@ -38,7 +38,7 @@ export type CrossingOutcome =
 const show = (k: number) => `${(k - 273.15).toFixed(2)} °C (${k.toFixed(2)} K)`;
 
 function unreachable(q: CrossingQuery): CrossingOutcome {
-  const { startK, targetK, mediumK, toleranceK, pointLabel } = q;
+  const { startK, targetK, mediumK, toleranceK, pointLabel, monotone } = q;
   if (Math.abs(targetK - mediumK) <= toleranceK) {
     return { ok: false, code: 'target-unreachable', message: `The target ${show(targetK)} equals the medium temperature ${show(mediumK)}: the ${pointLabel} only approaches it asymptotically and never reaches it in finite time. Set the target a little short of the medium temperature.` };
   }
@@ -46,7 +46,8 @@ function unreachable(q: CrossingQuery): CrossingOutcome {
   if (Math.sign(targetK - mediumK) === towardMedium) {
     return { ok: false, code: 'target-unreachable', message: `The target ${show(targetK)} lies on the far side of the medium temperature ${show(mediumK)}: the ${pointLabel} (starting at ${show(startK)}) moves toward the medium and cannot pass it.` };
   }
-  return { ok: false, code: 'target-unreachable', message: `The target ${show(targetK)} is beyond what the field can reach: the ${pointLabel} starts at ${show(startK)} and only moves toward the medium at ${show(mediumK)} in this stage.` };
+  const path = monotone ? 'only moves toward' : 'tends to';
+  return { ok: false, code: 'target-unreachable', message: `The target ${show(targetK)} is beyond what the field can reach: the ${pointLabel} starts at ${show(startK)} and ${path} the medium at ${show(mediumK)} without getting there in this stage.` };
 }
 
 export function firstCrossingFo(q: CrossingQuery): CrossingOutcome {

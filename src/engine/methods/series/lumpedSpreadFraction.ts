@@ -2,18 +2,33 @@
 //   (T_centre - T_surface) / (T_i - T_inf) = sum C_n (1 - X_n(1)) exp(-lambda_n^2 Fo)
 // for a uniform start (Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., Eqs. 5.39-5.50, from memory).
 // The lumped method assumes it is zero; this is its error scale. Bi on the series length (L or r0), not on V/As.
+// Truncation as in uniformStartSolution (tail below 1e-12); valid for Fo >= 1e-5 (the scan's lower end).
 import type { SeriesGeometry } from '@/engine/geometry/geometry';
-import { uniformStartTheta } from './uniformStartSolution';
+import { eigenfunction, uniformStartCoefficient } from './eigenfunction';
+import { eigenvalues } from './eigenvalues';
+import { seriesTermCount } from './seriesTermCount';
+import { seriesSum } from './seriesSum';
 
+const THETA_TAIL_TOLERANCE = 1e-12;
+const UNIFORM_COEFFICIENT_BOUND = 2;
 const LOG_FO_FROM = -5;
 const LOG_FO_TO = 2;
 const SCAN_POINTS = 141;
 const GOLDEN_ITERATIONS = 60;
 const INV_GOLDEN = (Math.sqrt(5) - 1) / 2;
 
-/** Exact (theta_centre - theta_surface) at Fo > 0 for a uniform start. */
+/** The spread as a function of Fo >= foFrom, with the terms computed once. */
+function spreadCurve(geometry: SeriesGeometry, biSeries: number, foFrom: number): (fo: number) => number {
+  const most = seriesTermCount(foFrom, UNIFORM_COEFFICIENT_BOUND, THETA_TAIL_TOLERANCE);
+  if (!Number.isFinite(most)) throw new RangeError(`Fo = ${foFrom} is below the series floor`);
+  const lambdas = eigenvalues(geometry, biSeries, most);
+  const weights = Float64Array.from(lambdas, (l) => uniformStartCoefficient(geometry, l) * (1 - eigenfunction(geometry, l)));
+  return (fo) => seriesSum(weights, lambdas, fo, Math.min(most, seriesTermCount(fo, UNIFORM_COEFFICIENT_BOUND, THETA_TAIL_TOLERANCE)));
+}
+
+/** Exact (theta_centre - theta_surface) at Fo >= 1e-5 for a uniform start. */
 export function lumpedSpreadFraction(geometry: SeriesGeometry, biSeries: number, fo: number): number {
-  return uniformStartTheta(geometry, biSeries, 0, fo) - uniformStartTheta(geometry, biSeries, 1, fo);
+  return spreadCurve(geometry, biSeries, fo)(fo);
 }
 
 /**
@@ -21,7 +36,8 @@ export function lumpedSpreadFraction(geometry: SeriesGeometry, biSeries: number,
  * refinement around the best point (Kiefer 1953; Press et al., Numerical Recipes, 3rd ed., Sec. 10.2, from memory).
  */
 export function largestLumpedSpreadFraction(geometry: SeriesGeometry, biSeries: number): { fraction: number; fo: number } {
-  const at = (logFo: number) => lumpedSpreadFraction(geometry, biSeries, 10 ** logFo);
+  const curve = spreadCurve(geometry, biSeries, 10 ** LOG_FO_FROM);
+  const at = (logFo: number) => curve(10 ** logFo);
   const step = (LOG_FO_TO - LOG_FO_FROM) / (SCAN_POINTS - 1);
   let best = 0;
   let bestValue = -Infinity;
@@ -40,5 +56,6 @@ export function largestLumpedSpreadFraction(geometry: SeriesGeometry, biSeries: 
     else { a = c; c = d; fc = fd; d = a + INV_GOLDEN * (b - a); fd = at(d); }
   }
   const logFo = 0.5 * (a + b);
-  return { fraction: Math.max(at(logFo), bestValue), fo: 10 ** logFo };
+  const refined = at(logFo);
+  return refined >= bestValue ? { fraction: refined, fo: 10 ** logFo } : { fraction: bestValue, fo: 10 ** (LOG_FO_FROM + best * step) };
 }

@@ -14,7 +14,7 @@ import { eigenfunction, eigenfunctionMean } from './eigenfunction';
 import { eigenvalues } from './eigenvalues';
 import { meanTemperature, temperatureAt } from './evaluateField1D';
 import { firstCrossingFo } from './firstCrossingFo';
-import { oneTermMeanTheta, oneTermTheta, ONE_TERM_FROM_FO } from './oneTermApproximation';
+import { oneTermApproximation, ONE_TERM_FROM_FO } from './oneTermApproximation';
 import { projectField } from './projectField';
 import { MAX_SERIES_TERMS, seriesFourierFloor, seriesTermCount } from './seriesTermCount';
 import { seriesSum } from './seriesSum';
@@ -178,15 +178,21 @@ export const solveSeriesStage: StageSolver = (problem) => {
   const notes: StageNote[] = [];
   if (start.kind === 'uniform' && foEnd > ONE_TERM_FROM_FO) {
     const excess = start.temperatureK - mediumK;
+    const oneTerm = oneTermApproximation(shape, bi);
+    const surfaceX = eigenfunction(shape, oneTerm.lambda1);
+    const centre = temperaturesK.centre as Float64Array;
+    const surfaceCurve = temperaturesK.surface as Float64Array;
+    const mean = temperaturesK.mean as Float64Array;
     let centreK = 0;
     let surfaceK = 0;
     let meanK = 0;
     for (let k = 1; k < count; k++) {
       const fo = k * dFo;
       if (fo <= ONE_TERM_FROM_FO) continue;
-      centreK = Math.max(centreK, Math.abs(mediumK + excess * oneTermTheta(shape, bi, 0, fo) - (temperaturesK.centre as Float64Array)[k]));
-      surfaceK = Math.max(surfaceK, Math.abs(mediumK + excess * oneTermTheta(shape, bi, 1, fo) - (temperaturesK.surface as Float64Array)[k]));
-      meanK = Math.max(meanK, Math.abs(mediumK + excess * oneTermMeanTheta(shape, bi, fo) - (temperaturesK.mean as Float64Array)[k]));
+      const centreTheta = oneTerm.theta(0, fo);
+      centreK = Math.max(centreK, Math.abs(mediumK + excess * centreTheta - centre[k]));
+      surfaceK = Math.max(surfaceK, Math.abs(mediumK + excess * centreTheta * surfaceX - surfaceCurve[k]));
+      meanK = Math.max(meanK, Math.abs(mediumK + excess * oneTerm.meanTheta(fo) - mean[k]));
     }
     notes.push({ kind: 'one-term-error', centreK, surfaceK, meanK, fromFo: ONE_TERM_FROM_FO });
   }
