@@ -7,6 +7,8 @@ import { BUILT_IN_MEDIA, builtInMedium } from '@/library/builtInLibrary';
 import { MAX_VARIANTS } from '@/schema/planFileSchema';
 import type { PlanVariant } from '@/schema/planDocument';
 import { PlotlyChart } from '@/features/charts/PlotlyChart';
+import { QuantityField } from '@/features/part/QuantityField';
+import type { EndCondition } from '@/schema/planSchema';
 import { compareVariants } from './compareVariants';
 import { ComparisonTable } from './ComparisonTable';
 import { planOverlayFigure } from './planOverlayFigure';
@@ -14,6 +16,42 @@ import { swapStageMedium } from './swapStageMedium';
 import './VariantsScreen.css';
 
 const CUSTOM_MEDIUM = '';
+/** The schema's upper limit on a stage duration. */
+const MAX_STAGE_DURATION_S = 1e8;
+const POINT_WORDS: Record<string, string> = { centre: 'centre', surface: 'surface', mean: 'mean', depth: 'depth' };
+
+/** The one number of a stage's end condition: its duration, or the temperature its point must reach. */
+function EndField({ end, label, onChange }: { end: EndCondition; label: string; onChange: (end: EndCondition) => void }) {
+  const unitSystem = useAppStore((s) => s.unitSystem);
+  if (end.kind === 'duration') {
+    return (
+      <QuantityField
+        label={`${label}: duration`}
+        kind="duration"
+        valueSI={end.seconds}
+        system={unitSystem}
+        check={(s) => (s > 0 && s < MAX_STAGE_DURATION_S ? null : `must be above 0 and below ${MAX_STAGE_DURATION_S} s`)}
+        onCommit={(seconds) => {
+          onChange({ ...end, seconds });
+          return null;
+        }}
+      />
+    );
+  }
+  return (
+    <QuantityField
+      label={`${label}: ${POINT_WORDS[end.point] ?? end.point} reaches`}
+      kind="temperature"
+      valueSI={end.temperature}
+      system={unitSystem}
+      check={(k) => (k > 0 ? null : 'must be above absolute zero')}
+      onCommit={(temperature) => {
+        onChange({ ...end, temperature });
+        return null;
+      }}
+    />
+  );
+}
 
 function VariantCard({ variant }: { variant: PlanVariant }) {
   const renameVariant = useAppStore((s) => s.renameVariant);
@@ -55,6 +93,7 @@ function VariantCard({ variant }: { variant: PlanVariant }) {
             <th scope="col">#</th>
             <th scope="col">Stage</th>
             <th scope="col">Medium</th>
+            <th scope="col">Ends</th>
           </tr>
         </thead>
         <tbody>
@@ -87,6 +126,13 @@ function VariantCard({ variant }: { variant: PlanVariant }) {
                     ))}
                   </select>
                 </td>
+                <td>
+                  <EndField
+                    end={stage.end}
+                    label={`Stage ${i + 1}`}
+                    onChange={(end) => editVariant(variant.id, (p) => ({ ...p, stages: p.stages.map((s, j) => (j === i ? { ...s, end } : s)) }), `variant.${variant.id}.stage.${i}.end`)}
+                  />
+                </td>
               </tr>
             );
           })}
@@ -117,7 +163,7 @@ export function VariantsScreen() {
     <div className="cs-variants" data-testid="variants-screen">
       <div className="cs-variants-list">
         <h2>Variants of “{document.main.name}”</h2>
-        <p>A variant starts as a copy of the main plan. Swap a stage’s medium here; to change anything else, make it the main plan (the current main plan stays as a variant).</p>
+        <p>A variant starts as a copy of the main plan. Swap a stage’s medium or its end here; to change anything else, make it the main plan (the current main plan stays as a variant).</p>
         <button type="button" onClick={() => addVariant()} disabled={full} data-testid="add-variant">
           New variant from the main plan
         </button>
