@@ -9,10 +9,10 @@
 // less than picardToleranceK (the caller sets it well below the reported tolerance): the modified Picard iteration of Celia, Bouloutas and Zarba,
 // Water Resour. Res. 26 (1990) 1483, which conserves the integral exactly at convergence (from memory).
 // Convergence: a step that has not converged in PICARD_MAX_ITERATIONS is reported so the caller
-// shortens it. Lines are solved with the shared Thomas solver (numerics/solveTridiagonal).
+// shortens it. Lines are solved in place along their stride by the Thomas algorithm (the recurrences of
+// numerics/solveTridiagonal, which works on contiguous arrays; gathering each line cost a third of the step).
 import type { SurfaceBoundary } from '../../properties/surfaceBoundary';
 import { evaluateMaterial, type MaterialTable } from '../finite-volume/tabulateMaterial';
-import { solveTridiagonal } from '../../numerics/solveTridiagonal';
 import type { FiniteGrid } from './finiteGrid';
 
 const PICARD_MAX_ITERATIONS = 25;
@@ -58,11 +58,6 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
   const delta = new Float64Array(size);
   const faceG = faceAreaPerSpacingM.map(() => new Float64Array(size));
   const maxLine = Math.max(...counts);
-  const lower = new Float64Array(maxLine);
-  const diag = new Float64Array(maxLine);
-  const upper = new Float64Array(maxLine);
-  const lineRhs = new Float64Array(maxLine);
-  const lineX = new Float64Array(maxLine);
   const work = new Float64Array(maxLine);
 
   /** Solves (capPerDt - L_d/2) x = rhs along every line of axis d into delta; returns sum over the d-surface of S q' x. */
@@ -72,21 +67,34 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
     const g = faceG[d];
     const area = surfaceAreaM2[d];
     let surfaceSum = 0;
-    for (const start of lineStarts[d]) {
+    const starts = lineStarts[d];
+    for (let l = 0; l < starts.length; l++) {
+      const start = starts[l];
+      // Thomas algorithm along the strided line (the shared solver's recurrences, Press et al. Sec. 2.4).
+      let p = start;
       let prevG = 0;
+      let prevW = 0;
+      let prevX = 0;
       for (let i = 0; i < n; i++) {
-        const p = start + i * s;
         const nextG = i < n - 1 ? g[p] : 0;
-        diag[i] = capPerDt[p] + 0.5 * (prevG + nextG + area[p] * qSlope[p]);
-        lower[i] = -0.5 * prevG;
-        upper[i] = -0.5 * nextG;
-        lineRhs[i] = rhs[p];
+        const sub = -0.5 * prevG;
+        const beta = capPerDt[p] + 0.5 * (prevG + nextG + area[p] * qSlope[p]) - sub * prevW;
+        const w = (-0.5 * nextG) / beta;
+        const x = (rhs[p] - sub * prevX) / beta;
+        work[i] = w;
+        delta[p] = x;
+        prevW = w;
+        prevX = x;
         prevG = nextG;
+        p += s;
       }
-      solveTridiagonal(n, lower, diag, upper, lineRhs, lineX, work);
-      for (let i = 0; i < n; i++) delta[start + i * s] = lineX[i];
-      const last = start + (n - 1) * s;
-      surfaceSum += area[last] * qSlope[last] * lineX[n - 1];
+      p -= s;
+      surfaceSum += area[p] * qSlope[p] * delta[p];
+      for (let i = n - 2; i >= 0; i--) {
+        const q = p - s;
+        delta[q] -= work[i] * delta[p];
+        p = q;
+      }
     }
     return surfaceSum;
   };
