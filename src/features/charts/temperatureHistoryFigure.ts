@@ -16,28 +16,39 @@ export interface TemperatureHistoryOptions {
   system: UnitSystem;
   targets?: readonly ChartTarget[];
   extraSeries?: readonly ExtraSeries[];
+  /** 'log' spreads short early stages (transfer, quench) out against a long hold; t = 0 itself is not drawn there. */
+  timeAxis?: TimeAxisKind;
 }
+
+export type TimeAxisKind = 'linear' | 'log';
 
 const STAGE_SHADE = 'rgba(40, 70, 120, 0.05)';
 const STAGE_LINE = '#9aa5b1';
 const STAGE_LABEL_ROW_PX = 14;
 const FAILURE_COLOUR = '#a3281b';
 const STAGE_LABEL_TOP_PX = 12;
-/** A stage name needs about this share of the plot width before the next name may sit on the same row. */
-const STAGE_LABEL_MIN_GAP = 0.16;
 const STAGE_LABEL_MAX_ROWS = 4;
+/** For spacing stage names: about 6.5 px per character at 11 px, on a plot assumed no wider than 600 px (small panels). */
+const STAGE_LABEL_CHAR_PX = 6.5;
+const STAGE_LABEL_PAD_PX = 10;
+const STAGE_LABEL_ASSUMED_PLOT_PX = 600;
+
+/** The share of the plot width a stage name takes, on the assumed narrowest plot. */
+export function stageLabelWidthFraction(text: string): number {
+  return (text.length * STAGE_LABEL_CHAR_PX + STAGE_LABEL_PAD_PX) / STAGE_LABEL_ASSUMED_PLOT_PX;
+}
 
 /**
  * The row (0 = lowest) of each stage name above the plot, so that names of short stages do not overlap:
- * a name goes on the lowest row whose last name started at least STAGE_LABEL_MIN_GAP of the plan earlier.
- * startFractions: each stage's start as a fraction of the whole plan, ascending.
+ * a name goes on the lowest row whose last name ends before this one starts.
+ * starts: each name's left edge as a fraction of the plot width, ascending; widths: each name's width, same units.
  */
-export function stageLabelRows(startFractions: readonly number[]): number[] {
-  const lastStartInRow: number[] = [];
-  return startFractions.map((x) => {
-    let row = lastStartInRow.findIndex((last) => x - last >= STAGE_LABEL_MIN_GAP);
-    if (row < 0) row = lastStartInRow.length < STAGE_LABEL_MAX_ROWS ? lastStartInRow.length : lastStartInRow.indexOf(Math.min(...lastStartInRow));
-    lastStartInRow[row] = x;
+export function stageLabelRows(starts: readonly number[], widths: readonly number[]): number[] {
+  const rowEnds: number[] = [];
+  return starts.map((x, i) => {
+    let row = rowEnds.findIndex((end) => x >= end);
+    if (row < 0) row = rowEnds.length < STAGE_LABEL_MAX_ROWS ? rowEnds.length : rowEnds.indexOf(Math.min(...rowEnds));
+    rowEnds[row] = x + widths[i];
     return row;
   });
 }
@@ -46,7 +57,17 @@ export function temperatureHistoryFigure(result: PlanResult, options: Temperatur
   const { system } = options;
   const temperature = displayUnit('temperature', system);
   const scale = timeAxisScale(result.totalDurationS);
+  const logTime = options.timeAxis === 'log';
   const toAxisTime = (s: number) => s / scale.secondsPerUnit;
+  // On a log axis nothing sits at t = 0: stage bands start at the first sampled time after 0.
+  const firstPositiveS = Math.min(...result.stages.flatMap((st) => st.curves.timeS.filter((t) => t > 0)), result.totalDurationS);
+  const shapeTime = (s: number) => toAxisTime(logTime ? Math.max(s, firstPositiveS) : s);
+  // Plotly places annotations on a log axis by the log10 of the value.
+  const annotationTime = (s: number) => (logTime ? Math.log10(shapeTime(s)) : toAxisTime(s));
+  const axisStart = logTime ? Math.log10(shapeTime(0)) : 0;
+  const axisEnd = logTime ? Math.log10(shapeTime(result.totalDurationS)) : toAxisTime(result.totalDurationS);
+  /** Where a time sits across the axis, 0 to 1, for spacing the stage names. */
+  const axisFraction = (axisTime: number) => ((logTime ? Math.log10(axisTime) : axisTime) - axisStart) / Math.max(axisEnd - axisStart, Number.MIN_VALUE);
   const shown = (k: number) => formatQuantity('temperature', k, system);
 
   const pointTraces: Data[] = result.points.flatMap(({ id, label }) => {
@@ -101,16 +122,17 @@ export function temperatureHistoryFigure(result: PlanResult, options: Temperatur
   });
 
   const shapes: Partial<Shape>[] = result.stages.flatMap((stage, i) => {
-    const x0 = toAxisTime(stage.startTimeS);
-    const x1 = toAxisTime(stage.startTimeS + stage.durationS);
+    const x0 = shapeTime(stage.startTimeS);
+    const x1 = shapeTime(stage.startTimeS + stage.durationS);
     const band: Partial<Shape> = { type: 'rect', xref: 'x', yref: 'paper', x0, x1, y0: 0, y1: 1, fillcolor: i % 2 === 0 ? STAGE_SHADE : 'rgba(0,0,0,0)', line: { width: 0 }, layer: 'below' };
     const boundary: Partial<Shape> = { type: 'line', xref: 'x', yref: 'paper', x0, x1: x0, y0: 0, y1: 1, line: { color: STAGE_LINE, width: 1, dash: 'dash' }, layer: 'below' };
     return i === 0 ? [band] : [band, boundary];
   });
-  const rows = stageLabelRows(result.stages.map((s) => s.startTimeS / Math.max(result.totalDurationS, Number.MIN_VALUE)));
+  const stageLabels = result.stages.map((stage) => `${stage.index + 1} ${stage.name}`);
+  const rows = stageLabelRows(result.stages.map((st) => axisFraction(shapeTime(st.startTimeS))), stageLabels.map(stageLabelWidthFraction));
   const annotations: Partial<Annotations>[] = result.stages.map((stage, i) => ({
-    xref: 'x', yref: 'paper', x: toAxisTime(stage.startTimeS), y: 1, yshift: rows[i] * STAGE_LABEL_ROW_PX, xanchor: 'left', yanchor: 'bottom', showarrow: false,
-    text: `${stage.index + 1} ${stage.name}`, font: { size: 11, color: '#394b5e' },
+    xref: 'x', yref: 'paper', x: annotationTime(stage.startTimeS), y: 1, yshift: rows[i] * STAGE_LABEL_ROW_PX, xanchor: 'left', yanchor: 'bottom', showarrow: false,
+    text: stageLabels[i], font: { size: 11, color: '#394b5e' },
   }));
   const labelRowCount = rows.length > 0 ? Math.max(...rows) + 1 : 0;
   const failure = result.failure;
@@ -118,9 +140,9 @@ export function temperatureHistoryFigure(result: PlanResult, options: Temperatur
     // The plan stopped: mark where, so the curves are not read as the whole plan.
     const last = result.stages[result.stages.length - 1];
     const stopS = last ? last.startTimeS + last.durationS : 0;
-    shapes.push({ type: 'line', xref: 'x', yref: 'paper', x0: toAxisTime(stopS), x1: toAxisTime(stopS), y0: 0, y1: 1, line: { color: FAILURE_COLOUR, width: 2, dash: 'dot' } });
+    shapes.push({ type: 'line', xref: 'x', yref: 'paper', x0: shapeTime(stopS), x1: shapeTime(stopS), y0: 0, y1: 1, line: { color: FAILURE_COLOUR, width: 2, dash: 'dot' } });
     annotations.push({
-      xref: 'x', yref: 'paper', x: toAxisTime(stopS), y: 0.5, xanchor: 'right', showarrow: false, bgcolor: 'rgba(255,255,255,0.85)',
+      xref: 'x', yref: 'paper', x: annotationTime(stopS), y: 0.5, xanchor: 'right', showarrow: false, bgcolor: 'rgba(255,255,255,0.85)',
       text: `stage ${failure.index + 1} (${failure.name}) not computed ▸`, font: { size: 11, color: FAILURE_COLOUR },
     });
   }
@@ -128,6 +150,10 @@ export function temperatureHistoryFigure(result: PlanResult, options: Temperatur
   const base = chartLayoutBase(`Time (${scale.symbol})`, `Temperature (${temperature.symbol})`);
   return {
     data: [...pointTraces, ...targetTraces, ...extraTraces],
-    layout: { ...base, shapes, annotations, margin: { ...base.margin, t: STAGE_LABEL_TOP_PX + labelRowCount * STAGE_LABEL_ROW_PX }, xaxis: { ...base.xaxis, rangemode: 'tozero' } },
+    layout: {
+      ...base, shapes, annotations,
+      margin: { ...base.margin, t: STAGE_LABEL_TOP_PX + labelRowCount * STAGE_LABEL_ROW_PX },
+      xaxis: logTime ? { ...base.xaxis, type: 'log', title: { text: `Time (${scale.symbol}, log scale)` } } : { ...base.xaxis, rangemode: 'tozero' },
+    },
   };
 }

@@ -2,7 +2,7 @@
 // Unit conversions themselves are checked against NIST SP 811 in test/unit/units.
 import { describe, expect, it } from 'vitest';
 import type { ScatterData, Shape, Annotations } from 'plotly.js';
-import { stageLabelRows, temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
+import { stageLabelRows, stageLabelWidthFraction, temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
 import { quenchedShaftResult as result } from '../../components/fixtures/quenchedShaftResult';
 
 const DISPLAY_TOL = 1e-9;
@@ -55,9 +55,19 @@ describe('temperatureHistoryFigure', () => {
 });
 
 describe('stageLabelRows', () => {
-  it('lifts the name of a stage that starts close to the previous one, and reuses free rows', () => {
-    // Starts at 0, 2.5 %, 25 %, 27 % and 60 % of the plan; a name needs 16 % of the width.
-    expect(stageLabelRows([0, 0.025, 0.25, 0.27, 0.6])).toEqual([0, 1, 0, 1, 0]);
+  it('lifts the name of a stage that starts before the previous name ends, and reuses free rows', () => {
+    // Names 16 % of the width wide, starting at 0, 2.5 %, 25 %, 27 % and 60 % across.
+    expect(stageLabelRows([0, 0.025, 0.25, 0.27, 0.6], [0.16, 0.16, 0.16, 0.16, 0.16])).toEqual([0, 1, 0, 1, 0]);
+  });
+  it('a name of 14 characters takes (14 × 6.5 + 10) / 600 of the width', () => {
+    expect(stageLabelWidthFraction('2 oil quench12')).toBeCloseTo(101 / 600, 12);
+  });
+  it('on a log axis the names spread with the stages', () => {
+    const figure = temperatureHistoryFigure(result, { system: 'si', timeAxis: 'log' });
+    expect(figure.layout.xaxis?.type).toBe('log');
+    const first = (figure.layout.annotations as Partial<Annotations>[])[1];
+    // Annotations sit at log10 of the axis value: the quench starts at 20 s = 1/3 min.
+    expect(first.x).toBeCloseTo(Math.log10(20 / 60), 12);
   });
   it('the fixture plan: the quench starts 2.5 % in, so its name goes one row up', () => {
     const figure = temperatureHistoryFigure(result, { system: 'si' });
