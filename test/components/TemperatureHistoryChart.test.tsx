@@ -17,13 +17,19 @@ afterEach(() => {
 const lastLayout = () => (plotly.react.mock.calls.at(-1) as unknown as [HTMLElement, unknown, Partial<Layout>])[2];
 
 describe('TemperatureHistoryChart', () => {
-  it('starts linear and switches to a log time axis', async () => {
-    render(<TemperatureHistoryChart result={result} system="si" />);
+  it('starts where asked (linear) and switches to a log time axis', async () => {
+    render(<TemperatureHistoryChart result={result} system="si" initialTimeAxis="linear" />);
     await waitFor(() => expect(plotly.react).toHaveBeenCalledTimes(1));
     expect(lastLayout().xaxis?.type).toBeUndefined();
     fireEvent.click(screen.getByRole('radio', { name: 'log' }));
     await waitFor(() => expect(plotly.react).toHaveBeenCalledTimes(2));
     expect(lastLayout().xaxis?.type).toBe('log');
     expect((lastLayout().xaxis?.title as { text: string }).text).toBe('Time (min, log scale)');
+  });
+  it('starts on the suggested axis: log for the fixture, whose 20 s transfer is 2.5 % of the plan', async () => {
+    render(<TemperatureHistoryChart result={result} system="si" />);
+    await waitFor(() => expect(plotly.react).toHaveBeenCalledTimes(1));
+    expect(lastLayout().xaxis?.type).toBe('log');
+    expect((screen.getByRole('radio', { name: 'log' }) as HTMLInputElement).checked).toBe(true);
   });
 });

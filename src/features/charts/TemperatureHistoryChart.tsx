@@ -1,4 +1,5 @@
-// Temperature against time for the whole plan, with a linear / log time-axis switch (view state only).
+// Temperature against time for the whole plan, with a linear / log time-axis switch (view state only,
+// starting on the suggested axis).
 // Props in, chart out.
 import { useId, useMemo, useState } from 'react';
 import type { PlanResult } from '@/engine/plan/planResult';
@@ -6,6 +7,7 @@ import type { UnitSystem } from '@/features/units/unitSystem';
 import type { ChartTarget, ExtraSeries } from './chartTarget';
 import { PlotlyChart } from './PlotlyChart';
 import { temperatureHistoryFigure, type TimeAxisKind } from './temperatureHistoryFigure';
+import { suggestedTimeAxis } from './suggestedTimeAxis';
 
 export interface TemperatureHistoryChartProps {
   result: PlanResult;
@@ -13,6 +15,7 @@ export interface TemperatureHistoryChartProps {
   targets?: readonly ChartTarget[];
   extraSeries?: readonly ExtraSeries[];
   heightPx?: number;
+  /** The time axis to start on; by default log when a stage is a sliver of the plan (suggestedTimeAxis). */
   initialTimeAxis?: TimeAxisKind;
 }
 
@@ -21,8 +24,8 @@ const TIME_AXES: { id: TimeAxisKind; label: string }[] = [
   { id: 'log', label: 'log' },
 ];
 
-export function TemperatureHistoryChart({ result, system, targets, extraSeries, heightPx, initialTimeAxis = 'linear' }: TemperatureHistoryChartProps) {
-  const [timeAxis, setTimeAxis] = useState<TimeAxisKind>(initialTimeAxis);
+export function TemperatureHistoryChart({ result, system, targets, extraSeries, heightPx, initialTimeAxis }: TemperatureHistoryChartProps) {
+  const [timeAxis, setTimeAxis] = useState<TimeAxisKind>(() => initialTimeAxis ?? suggestedTimeAxis(result));
   const name = useId();
   const figure = useMemo(() => temperatureHistoryFigure(result, { system, targets, extraSeries, timeAxis }), [result, system, targets, extraSeries, timeAxis]);
   return (

@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import type { ScatterData, Shape, Annotations } from 'plotly.js';
 import { stageLabelRows, stageLabelWidthFraction, temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
+import { suggestedTimeAxis } from '@/features/charts/suggestedTimeAxis';
 import { quenchedShaftResult as result } from '../../components/fixtures/quenchedShaftResult';
 
 const DISPLAY_TOL = 1e-9;
@@ -101,5 +102,13 @@ describe('finite shapes', () => {
     const data = traces(temperatureHistoryFigure({ ...result, points, stages }, { system: 'si' }));
     expect(data.map((t) => t.name)).toEqual(points.map((p) => p.label));
     expect(new Set(data.map((t) => `${t.line?.dash}/${t.marker?.symbol}`)).size).toBe(points.length);
+  });
+});
+
+describe('suggestedTimeAxis', () => {
+  it('log when a stage is under 5 % of the plan (fixture: 20 s of 802.5 s = 2.5 %), linear otherwise', () => {
+    expect(suggestedTimeAxis(result)).toBe('log');
+    expect(suggestedTimeAxis({ ...result, stages: result.stages.slice(1), totalDurationS: 782.5 })).toBe('linear'); // 182.5 s of 782.5 s = 23 %
+    expect(suggestedTimeAxis({ ...result, stages: result.stages.slice(0, 1), totalDurationS: 20 })).toBe('linear');
   });
 });
