@@ -86,3 +86,15 @@ describe('StageSheet', () => {
     expect(screen.getByTestId('sheet-part').textContent).toContain('1562.0 °F');
   });
 });
+
+describe('StageSheet media sources', () => {
+  it('names where each stage’s h comes from: library source, curve label, or user data', async () => {
+    const { builtInMedium } = await import('@/library/builtInLibrary');
+    const air = builtInMedium('still-air')!;
+    const plan = structuredClone(demoDocument.main);
+    plan.stages[0].medium.libraryId = 'still-air';
+    render(<StageSheet document={{ ...demoDocument, main: plan, variants: [] }} results={{}} unitSystem="si" chartSvg={null} todayIso="2026-12-01" entryCautions={[]} />);
+    const items = within(screen.getByTestId('sheet-media-sources')).getAllByRole('listitem').map((li) => li.textContent);
+    expect(items).toEqual([`Stage 1 (still air), h: library “${air.name}”: ${air.hWPerM2K.source}`, 'Stage 2 (still air), h: as entered in the plan (user data)']);
+  });
+});

@@ -14,6 +14,7 @@ import { ComparisonTable } from '@/features/variants/ComparisonTable';
 import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { describeEndCondition, describeHeatTransfer } from './describeStage';
 import { sheetAssumptions } from './sheetAssumptions';
+import { sheetMediaSources } from './sheetMediaSources';
 import './StageSheet.css';
 
 export interface StageSheetProps {
@@ -184,10 +185,19 @@ export function StageSheet({ document, results, unitSystem, chartSvg, todayIso, 
             })}
           </tbody>
         </table>
-        {stageNames.some((_, i) => plan.stages[i].note) ? (
-          <ul className="cs-sheet-notes">
-            {plan.stages.map((s, i) => (s.note ? <li key={i}>Stage {i + 1} note: {s.note}</li> : null))}
-          </ul>
+        <h3>Where the heat transfer numbers come from</h3>
+        <ul className="cs-sheet-notes" data-testid="sheet-media-sources">
+          {sheetMediaSources(plan).map((line) => (
+            <li key={line}>{line}</li>
+          ))}
+        </ul>
+        {plan.stages.some((s) => s.note) ? (
+          <>
+            <h3>Stage notes</h3>
+            <ul className="cs-sheet-notes">
+              {plan.stages.map((s, i) => (s.note ? <li key={i}>Stage {i + 1} ({s.name}): {s.note}</li> : null))}
+            </ul>
+          </>
         ) : null}
       </section>
 
