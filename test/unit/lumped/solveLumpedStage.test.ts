@@ -135,3 +135,50 @@ describe('solveLumpedStage', () => {
     if (!slow.ok) expect(slow.code, slow.message).toBe('target-not-reached');
   });
 });
+
+describe('solveLumpedStage, tabulated h and other start fields', () => {
+  it('h(T) table: time to target equals the quadrature t = (rho c V / As) int dT / (h(T)(T - T_inf)) (separation of variables)', () => {
+    // Invented boiling-like h table (demo numbers); constant rho c so the time is a single integral.
+    const rows: [number, number][] = [[330, 300], [450, 4000], [600, 1500], [800, 250], [1200, 180]];
+    const p = stageProblem({ shape: { kind: 'sphere', radiusM: 0.004 }, kWPerMK: 30, rhoKgPerM3: 7800, cJPerKgK: 500, hWPerM2K: { rows }, mediumK: 320, start: { kind: 'uniform', temperatureK: 1150 }, end: { kind: 'point-temperature', point: 'centre', temperatureK: 400 } });
+    const s = solved(solveLumpedStage(p));
+    const V = p.geometry.volumeM3;
+    const As = p.geometry.cooledAreaM2;
+    // Composite Simpson between the table rows (the integrand is smooth on each piece), Burden & Faires 9th ed. Sec. 4.4 (from memory).
+    const g = (t: number) => 1 / (p.boundary.convectionCoefficient(t) * (t - 320));
+    const cuts = [400, 450, 600, 800, 1150];
+    let integral = 0;
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const a = cuts[i];
+      const b = cuts[i + 1];
+      const n = 2000;
+      const h = (b - a) / n;
+      let sum = g(a) + g(b);
+      for (let j = 1; j < n; j++) sum += (j % 2 ? 4 : 2) * g(a + j * h);
+      integral += (sum * h) / 3;
+    }
+    const expected = ((7800 * 500 * V) / As) * integral;
+    expect(Math.abs(s.durationS - expected) / expected, `lumped ${s.durationS} s, quadrature ${expected} s`).toBeLessThan(1e-9);
+    expect(s.energyRelativeError as number).toBeLessThan(1e-8);
+  });
+
+  it('starts from the volume mean of a tensor-grid field (control-volume sum of the finite-volume solver)', () => {
+    const shape: Shape = { kind: 'bar', halfWidthM: 0.02, halfHeightM: 0.01 };
+    const nodesX = Float64Array.of(0, 0.01, 0.02);
+    const nodesY = Float64Array.of(0, 0.01);
+    // T = 900 + 1000 x (linear in x, flat in y): the mean over the cross-section is 900 + 1000 * 0.01 = 910 K on any
+    // symmetric control-volume rule that is exact for linear profiles.
+    const temperaturesK = Float64Array.from({ length: 6 }, (_, p) => 900 + 1000 * nodesX[p % 3]);
+    const s = solved(solveLumpedStage(stageProblem({ shape, kWPerMK: 30, rhoKgPerM3: 7800, cJPerKgK: 500, hWPerM2K: 50, mediumK: 300, start: { kind: 'tensor-grid', nodesM: [nodesX, nodesY], temperaturesK }, end: { kind: 'duration', seconds: 10 } })));
+    expect((s.samples.temperaturesK.centre as Float64Array)[0]).toBeCloseTo(910, 9);
+    expect((s.samples.temperaturesK.corner as Float64Array | undefined)?.[0] ?? (s.samples.temperaturesK.edge as Float64Array)[0]).toBeCloseTo(910, 9);
+  });
+
+  it('stops when asked (abort signal)', () => {
+    const controller = new AbortController();
+    controller.abort();
+    const out = solveLumpedStage({ ...radiating(), signal: controller.signal });
+    expect(out.ok).toBe(false);
+    if (!out.ok) expect(out.code).toBe('aborted');
+  });
+});

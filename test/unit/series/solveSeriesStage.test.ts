@@ -183,3 +183,43 @@ describe('solveSeriesStage', () => {
     }
   });
 });
+
+describe('solveSeriesStage, edge cases', () => {
+  it('insulated-back plate of thickness L equals the symmetric plate of half-thickness L; heat per m² on V = L', () => {
+    const start: Field = { kind: 'uniform', temperatureK: 1000 };
+    const end = { kind: 'duration' as const, seconds: 200 };
+    const back = solved(solveSeriesStage(base({ kind: 'plate-insulated-back', thicknessM: 0.015 }, start, end)));
+    const sym = solved(solveSeriesStage(base({ kind: 'plate', halfThicknessM: 0.015 }, start, end)));
+    expect((back.samples.temperaturesK.centre as Float64Array)[200]).toBeCloseTo((sym.samples.temperaturesK.centre as Float64Array)[200], 10);
+    expect(back.heatRemovedJ / sym.heatRemovedJ, 'one cooled face: half the heat of the two-faced plate').toBeCloseTo(0.5, 12);
+  });
+
+  it('Bi = 1e-6 (nearly insulated) and Bi = 1e5 (surface held at the medium) stay finite and physical', () => {
+    const start: Field = { kind: 'uniform', temperatureK: 1000 };
+    for (const { shape } of SHAPES) {
+      const tiny = solved(solveSeriesStage(base(shape, start, { kind: 'duration', seconds: 3600 }, { hWPerM2K: 1e-3 })));
+      const lumped = 350 + 650 * Math.exp(-(1e-3 * geometryOf(shape).cooledAreaM2 * 3600) / (RHO * C * geometryOf(shape).volumeM3));
+      expect(Math.abs((tiny.samples.temperaturesK.mean as Float64Array)[200] - lumped), `${shape.kind} tiny Bi vs lumped`).toBeLessThan(1e-6);
+      const huge = solved(solveSeriesStage(base(shape, start, { kind: 'duration', seconds: 60 }, { hWPerM2K: 1e8 })));
+      const surface = huge.samples.temperaturesK.surface as Float64Array;
+      expect(Math.abs(surface[1] - 350), `${shape.kind} huge Bi surface at the first sample ${surface[1]}`).toBeLessThan(0.1);
+      expect(Array.from(surface).every(Number.isFinite)).toBe(true);
+    }
+  });
+
+  it('refuses a start field of another shape or size with not-applicable (no throw)', () => {
+    const grid: Field = { kind: 'grid-1d', geometry: 'cylinder', lengthM: 0.02, nodesM: Float64Array.of(0, 0.02), temperaturesK: Float64Array.of(900, 800) };
+    const out = solveSeriesStage(base(PLATE, grid, { kind: 'duration', seconds: 10 }));
+    expect(out.ok).toBe(false);
+    if (!out.ok) expect(out.code, out.message).toBe('not-applicable');
+  });
+
+  it('a stage too short for the series floor is not-applicable, with the numbers', () => {
+    const out = solveSeriesStage(base(PLATE, { kind: 'uniform', temperatureK: 1000 }, { kind: 'duration', seconds: 1e-6 }));
+    expect(out.ok).toBe(false);
+    if (!out.ok) {
+      expect(out.code).toBe('not-applicable');
+      expect(out.message).toMatch(/floor/);
+    }
+  });
+});

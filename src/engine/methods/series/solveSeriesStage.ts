@@ -35,6 +35,9 @@ export const solveSeriesStage: StageSolver = (problem) => {
   if (problem.signal?.aborted) return { ok: false, code: 'aborted', message: 'Stopped.' };
   const lengthM = oneD.lengthM;
   const shape = oneD.geometry;
+  if (start.kind !== 'uniform' && (start.geometry !== shape || Math.abs(start.lengthM - lengthM) > 1e-12 * lengthM)) {
+    return notApplicable(`The start field belongs to a ${start.geometry} of ${start.lengthM} m, not to this ${shape} of ${lengthM} m.`);
+  }
   if (problem.depthM !== undefined && (problem.depthM < 0 || problem.depthM > lengthM)) {
     return notApplicable(`The depth ${problem.depthM} m lies outside the part (0 to ${lengthM} m below the cooled surface).`);
   }
@@ -130,7 +133,7 @@ export const solveSeriesStage: StageSolver = (problem) => {
   const count = Math.max(2, problem.sampleCount);
   const dFo = foEnd / (count - 1);
   const terms = termsAt(dFo);
-  if (!Number.isFinite(terms)) {
+  if (dFo < foFloor || !Number.isFinite(terms)) {
     return notApplicable(`The samples are too close to the start for the exact series (first sample at Fo = ${dFo.toExponential(2)}, floor ${foFloor.toExponential(2)}). Use fewer samples or the finite-volume method.`);
   }
   ensureTerms(terms);
