@@ -11,6 +11,7 @@ import type { ChartTarget, ExtraSeries } from './chartTarget';
 import { chartLayoutBase } from './chartLayoutBase';
 import { extraTraceStyle, MARKERS_PER_TRACE, pointTraceStyle } from './pointTraceStyle';
 import { timeAxisScale } from './timeAxisScale';
+import { stageLabelRows, stageLabelWidthFraction } from './stageLabelRows';
 
 export interface TemperatureHistoryOptions {
   system: UnitSystem;
@@ -27,31 +28,6 @@ const STAGE_LINE = '#9aa5b1';
 const STAGE_LABEL_ROW_PX = 14;
 const FAILURE_COLOUR = '#a3281b';
 const STAGE_LABEL_TOP_PX = 12;
-const STAGE_LABEL_MAX_ROWS = 4;
-/** For spacing stage names: about 6.5 px per character at 11 px, on a plot assumed no wider than 600 px (small panels). */
-const STAGE_LABEL_CHAR_PX = 6.5;
-const STAGE_LABEL_PAD_PX = 10;
-const STAGE_LABEL_ASSUMED_PLOT_PX = 600;
-
-/** The share of the plot width a stage name takes, on the assumed narrowest plot. */
-export function stageLabelWidthFraction(text: string): number {
-  return (text.length * STAGE_LABEL_CHAR_PX + STAGE_LABEL_PAD_PX) / STAGE_LABEL_ASSUMED_PLOT_PX;
-}
-
-/**
- * The row (0 = lowest) of each stage name above the plot, so that names of short stages do not overlap:
- * a name goes on the lowest row whose last name ends before this one starts.
- * starts: each name's left edge as a fraction of the plot width, ascending; widths: each name's width, same units.
- */
-export function stageLabelRows(starts: readonly number[], widths: readonly number[]): number[] {
-  const rowEnds: number[] = [];
-  return starts.map((x, i) => {
-    let row = rowEnds.findIndex((end) => x >= end);
-    if (row < 0) row = rowEnds.length < STAGE_LABEL_MAX_ROWS ? rowEnds.length : rowEnds.indexOf(Math.min(...rowEnds));
-    rowEnds[row] = x + widths[i];
-    return row;
-  });
-}
 
 export function temperatureHistoryFigure(result: PlanResult, options: TemperatureHistoryOptions): ChartFigure {
   const { system } = options;
@@ -102,7 +78,7 @@ export function temperatureHistoryFigure(result: PlanResult, options: Temperatur
     const label = `target: ${where} ${shown(target.temperatureK)} (${stage.index + 1} ${stage.name})`;
     return [{
       type: 'scatter', mode: 'lines+markers', name: 'stage targets', legendgroup: 'targets', showlegend: i === 0,
-      x: [toAxisTime(stage.startTimeS), toAxisTime(stage.startTimeS + stage.durationS)], y: [value, value],
+      x: [shapeTime(stage.startTimeS), shapeTime(stage.startTimeS + stage.durationS)], y: [value, value],
       text: [label, label], hovertemplate: '%{text}<extra></extra>',
       line: { color: style.colour, dash: 'dot', width: 1 },
       marker: { symbol: 'x-thin-open', size: [0, 12], color: style.colour, line: { width: 2, color: style.colour } },

@@ -2,7 +2,8 @@
 // Unit conversions themselves are checked against NIST SP 811 in test/unit/units.
 import { describe, expect, it } from 'vitest';
 import type { ScatterData, Shape, Annotations } from 'plotly.js';
-import { stageLabelRows, stageLabelWidthFraction, temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
+import { temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
+import { stageLabelRows, stageLabelWidthFraction } from '@/features/charts/stageLabelRows';
 import { suggestedTimeAxis } from '@/features/charts/suggestedTimeAxis';
 import { quenchedShaftResult as result } from '../../components/fixtures/quenchedShaftResult';
 
@@ -110,5 +111,14 @@ describe('suggestedTimeAxis', () => {
     expect(suggestedTimeAxis(result)).toBe('log');
     expect(suggestedTimeAxis({ ...result, stages: result.stages.slice(1), totalDurationS: 782.5 })).toBe('linear'); // 182.5 s of 782.5 s = 23 %
     expect(suggestedTimeAxis({ ...result, stages: result.stages.slice(0, 1), totalDurationS: 20 })).toBe('linear');
+  });
+});
+
+describe('targets on a log time axis', () => {
+  it('start at the first sampled time after 0, not at 0 (which a log axis cannot show)', () => {
+    const figure = temperatureHistoryFigure(result, { system: 'si', timeAxis: 'log', targets: [{ stageIndex: 0, point: 'surface', temperatureK: 1100 }] });
+    const target = traces(figure).find((t) => t.name === 'stage targets');
+    // The fixture's first positive sample is 20 s / 40 = 0.5 s.
+    expect(target?.x).toEqual([0.5 / 60, 20 / 60]);
   });
 });
