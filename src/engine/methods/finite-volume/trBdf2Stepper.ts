@@ -5,7 +5,7 @@
 // w = sqrt(2)/4, with the embedded third-order weights ((1-w)/3, (3w+1)/3, d/3): Hosea and Shampine,
 // Analysis and implementation of TR-BDF2, Appl. Numer. Math. 20 (1996) (from memory).
 // Validity: any step size (L-stable: no oscillation at large Bi or on the first step); second order in time.
-// Convergence rule: Newton per stage until the enthalpy residual over the diagonal is below newtonTolK (kelvin);
+// Convergence rule: Newton per stage until the enthalpy residual over V C is below newtonTolK (kelvin);
 // a stage that does not converge in MAX_NEWTON_ITERATIONS, or a step that leaves a cp peak unresolved, is refused.
 // Error: local error estimate h * sum (bhat - b) F, filtered by (V C - d h dF/dT)^-1 as Hosea and Shampine do,
 // in kelvin per node. Both stages are written as enthalpy differences equal to weighted sums of the fluxes, so
@@ -106,7 +106,8 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
 
   /**
    * Newton for V e(T) - a F(T) = explicit; T holds the guess and gets the solution. Converged when the residual,
-   * scaled by the diagonal to kelvin, is below newtonTolK: F, C, e are then those of the returned T.
+   * divided by the node's heat capacity V C (kelvin of stored energy), is below newtonTolK: F, C, e are then those
+   * of the returned T.
    */
   function solveStage(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number): number | null {
     for (let iter = 0; iter <= MAX_NEWTON_ITERATIONS; iter++) {
@@ -115,7 +116,9 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       for (let i = 0; i < n; i++) {
         const r = explicit[i] + a * f[i] - vol[i] * e[i];
         rhs[i] = r;
-        const rk = Math.abs(r) / diag[i];
+        // Scaled by the node's own capacity, not the diagonal: on long steps the conduction terms dominate the
+        // diagonal and would hide a residual that still creates or destroys energy.
+        const rk = Math.abs(r) / (vol[i] * c[i]);
         if (rk > residualK) residualK = rk;
       }
       if (!(residualK < Infinity) || !Number.isFinite(qs)) return null;
