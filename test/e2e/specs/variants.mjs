@@ -35,12 +35,18 @@ export async function run({ page, baseUrl, shot }) {
   await card.getByTestId('variant-name').fill('Bath instead of air');
   await card.getByTestId('variant-name').press('Enter');
 
-  // Both columns computed (no "computing…" left), and the headers name both plans.
+  // Both columns computed (no "computing…" left) from the swapped plan: wait until the engine has
+  // answered for the change (results up to date) and the swapped stage's row has been redrawn.
   const table = page.getByTestId('comparison-table');
-  await page.waitForFunction(() => {
+  await page.getByText('Results up to date').waitFor({ timeout: 30_000 });
+  await page.waitForFunction((label) => {
     const t = document.querySelector('[data-testid="comparison-table"]');
-    return t && !t.textContent.includes('computing') && t.querySelectorAll('thead th').length === 3;
-  }, null, { timeout: 30_000 });
+    if (!t || t.textContent.includes('computing') || t.querySelectorAll('thead th').length !== 3) return false;
+    const row = [...t.querySelectorAll('tbody tr')].find((tr) => tr.children[0].textContent === label);
+    return row && row.children[1].textContent !== row.children[2].textContent;
+  }, `Stage ${swapped + 1} duration`, { timeout: 30_000 }).catch(async () => {
+    throw new Error(`stage ${swapped + 1} never differed between the plans: ${await table.textContent()}`);
+  });
   const headers = await table.locator('thead th').allTextContents();
   if (!headers[2].includes('Bath instead of air')) throw new Error(`comparison headers: ${JSON.stringify(headers)}`);
   const rows = await table.locator('tbody tr').evaluateAll((trs) => trs.map((tr) => [...tr.children].map((c) => c.textContent.trim())));
