@@ -24,6 +24,8 @@ const cases: [Shape1D, string, Medium, number][] = [
   ['cylinder', 'boiling-curve bath', boilingBath, 60],
   ['sphere', 'boiling-curve bath', boilingBath, 60],
   ['cylinder', 'radiating air', radiatingAir, 300],
+  // A long hold: steps of tens of seconds, where the conduction terms dominate the Newton matrix.
+  ['slab', 'radiating air (long hold)', radiatingAir, 4000],
 ];
 
 describe('energy balance with variable properties', () => {
