@@ -1,6 +1,7 @@
 // Benchmark of the analytic methods: prints median and p95 wall times over many repetitions (no assertions).
 // Run: npx tsx test/bench/analytic.bench.ts   Budgets (brief): curves < 1 ms, time to target < 0.1 ms.
-import type { Field } from '@/engine/fields';
+import type { Field, Series1DField } from '@/engine/fields';
+import { temperatureAt } from '@/engine/methods/series/evaluateField1D';
 import type { StageEnd } from '@/engine/methods/stageProblem';
 import { solveSeriesStage } from '@/engine/methods/series/solveSeriesStage';
 import { solveLumpedStage } from '@/engine/methods/lumped/solveLumpedStage';
@@ -39,7 +40,12 @@ time('series curves, uniform start, plate (200 t x 3 points)', 2000, () => { mus
 time('series curves, uniform start (200 t x centre/surface/mean)', 2000, () => { must(solveSeriesStage(quench({ kind: 'duration', seconds: 120 }))); });
 time('series curves, projected series start (air hold after quench)', 2000, () => { must(solveSeriesStage(hold({ kind: 'duration', seconds: 600 }, quenched))); });
 time('series time to target (centre 600 K), uniform start', 2000, () => { must(solveSeriesStage(quench({ kind: 'point-temperature', point: 'centre', temperatureK: 600 }))); });
-time('series time to target (surface 520 K on its rebound), projected start', 2000, () => { must(solveSeriesStage(hold({ kind: 'point-temperature', point: 'surface', temperatureK: 520 }, quenched))); });
+time('series time to target (surface 520 K, 0.6 s into the hold: 353 terms), projected start', 2000, () => { must(solveSeriesStage(hold({ kind: 'point-temperature', point: 'surface', temperatureK: 520 }, quenched))); });
+
+// A finite-volume-like end field: 101 nodes sampled from the quenched series field.
+const nodes = Float64Array.from({ length: 101 }, (_, i) => (i / 100) * SHAFT.radiusM);
+const gridStart: Field = { kind: 'grid-1d', geometry: 'cylinder', lengthM: SHAFT.radiusM, nodesM: nodes, temperaturesK: Float64Array.from(nodes, (x) => temperatureAt(quenched as Series1DField, x)) };
+time('series curves, grid start (101 nodes, Gauss-Legendre projection)', 200, () => { must(solveSeriesStage(hold({ kind: 'duration', seconds: 600 }, gridStart))); });
 
 const smallPart = stageProblem({
   shape: { kind: 'sphere', radiusM: 0.006 }, kWPerMK: 30, rhoKgPerM3: 7800, cJPerKgK: { table: [[300, 450], [700, 600], [1000, 750], [1300, 640]] },

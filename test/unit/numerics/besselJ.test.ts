@@ -39,10 +39,11 @@ describe('Bessel J0, J1', () => {
     }
   });
 
-  it('agree with Bessel\'s integral to ~1e-14 of the envelope, across all three internal methods and large x', () => {
+  it('agree with Bessel\'s integral to ~1e-14 of the envelope, across the series, table and asymptotic ranges and large x', () => {
     const xs: number[] = [];
     for (let x = 0; x < 60; x += 0.0371) xs.push(x);
-    xs.push(1.9999999, 2, 24.9999999, 25, 100.5, 1234.5678, 9999.7);
+    // Method seams: series/table at 2, table/asymptotic at 25, and the half-way points between table nodes (step 1/32).
+    xs.push(1.9999999, 2, 2 + 1 / 64, 10 + 1 / 64 - 1e-12, 10 + 1 / 64 + 1e-12, 24.9999999, 25, 100.5, 1234.5678, 9999.7);
     for (const { order, name, f } of functions) {
       for (const x of xs) {
         const envelope = Math.min(1, Math.sqrt(2 / (Math.PI * Math.max(x, 1e-300))));
