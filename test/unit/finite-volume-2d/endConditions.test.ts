@@ -11,6 +11,9 @@ import type { StageSolver } from '@/engine/methods/stageProblem';
 import type { PointId, Shape } from '@/schema/planSchema';
 import { convection, curveOf, finiteProblem, flatBar, shortCylinder, smallBlock, solved } from './finiteShapeFixture';
 
+/** Guard against a stuck run on a loaded machine (the 3-D cases take about a second); not a speed check. */
+const SLOW_CASE_TIMEOUT_MS = 60_000;
+
 const OIL = convection(333, 800);
 /** A crossing located inside the step lands on the target far closer than the reported tolerance (0.01 K). */
 const LANDING_K = 1e-3;
@@ -30,7 +33,7 @@ describe('point-temperature ends', () => {
     ['block', smallBlock, 'corner', 450],
   ];
   for (const [name, shape, point, targetK] of targets) {
-    it(`${name}: ${point} reaches ${targetK} K, both methods, same time`, () => {
+    it(`${name}: ${point} reaches ${targetK} K, both methods, same time`, { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
       const problem = finiteProblem({ shape, medium: OIL, end: { kind: 'point-temperature', point, temperatureK: targetK } });
       const exact = solved(solveProductStage(problem));
       const fv = solved(solveFiniteVolume2DStage(problem));
@@ -45,24 +48,24 @@ describe('point-temperature ends', () => {
   }
 
   for (const [method, solve] of solvers) {
-    it(`${method}: a target below a bath at 333 K is unreachable`, () => {
+    it(`${method}: a target below a bath at 333 K is unreachable`, { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
       const outcome = solve(finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'point-temperature', point: 'centre', temperatureK: 320 } }));
       expect(outcome.ok).toBe(false);
       if (!outcome.ok) expect(outcome.code).toBe('target-unreachable');
     });
-    it(`${method}: the bath temperature itself is only approached, never reached`, () => {
+    it(`${method}: the bath temperature itself is only approached, never reached`, { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
       const outcome = solve(finiteProblem({ shape: flatBar, medium: OIL, end: { kind: 'point-temperature', point: 'centre', temperatureK: 333 } }));
       expect(outcome.ok).toBe(false);
       if (!outcome.ok) expect(outcome.code).toBe('target-unreachable');
     });
-    it(`${method}: a short cylinder has no corner`, () => {
+    it(`${method}: a short cylinder has no corner`, { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
       const outcome = solve(finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'point-temperature', point: 'corner', temperatureK: 500 } }));
       expect(outcome.ok).toBe(false);
       if (!outcome.ok) expect(outcome.code).toBe('not-applicable');
     });
   }
 
-  it('finite volume: a target in the radiation equilibrium band is approached only (radiation to hotter surroundings)', () => {
+  it('finite volume: a target in the radiation equilibrium band is approached only (radiation to hotter surroundings)', { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
     const medium = { name: 'test furnace air', temperature: 300, heatTransfer: { kind: 'constant' as const, hWPerM2K: 10 }, radiation: { emissivity: 0.9, surroundingsTemperature: 900 } };
     // The part settles between 300 K and 900 K, where convection loss equals radiation gain; 320 K lies below it.
     const outcome = solveFiniteVolume2DStage(finiteProblem({ shape: flatBar, medium, end: { kind: 'point-temperature', point: 'centre', temperatureK: 320 } }));
@@ -70,7 +73,7 @@ describe('point-temperature ends', () => {
     if (!outcome.ok) expect(outcome.code).toBe('target-unreachable');
   });
 
-  it('finite volume: a cancelled stage stops with "aborted"', () => {
+  it('finite volume: a cancelled stage stops with "aborted"', { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
     const controller = new AbortController();
     controller.abort();
     const outcome = solveFiniteVolume2DStage(finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'duration', seconds: 100 }, signal: controller.signal }));
@@ -80,7 +83,7 @@ describe('point-temperature ends', () => {
 });
 
 describe('the depth point and field look-ups', () => {
-  it('depth 0 is the side, depth r0 the axis; both methods; the runner helper reads the end fields alike', () => {
+  it('depth 0 is the side, depth r0 the axis; both methods; the runner helper reads the end fields alike', { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
     for (const [method, solve] of solvers) {
       const atSide = solved(solve(finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'duration', seconds: 60 }, depthM: 0 })));
       const atAxis = solved(solve(finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'duration', seconds: 60 }, depthM: shortCylinder.radiusM })));
@@ -95,7 +98,7 @@ describe('the depth point and field look-ups', () => {
     }
   });
 
-  it('the largest point spread of a quenched short cylinder is centre minus rim', () => {
+  it('the largest point spread of a quenched short cylinder is centre minus rim', { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
     const s = solved(solveFiniteVolume2DStage(finiteProblem({ shape: shortCylinder, medium: convection(300, 5000), end: { kind: 'duration', seconds: 30 } })));
     const centre = curveOf(s, 'centre');
     const rim = curveOf(s, 'edge');

@@ -12,6 +12,9 @@ import type { Material, Medium, Shape } from '@/schema/planSchema';
 import type { Field } from '@/engine/fields';
 import { boilingBath, finiteProblem, flatBar, radiatingAir, shortCylinder, smallBlock, solved, START_K, variableAlloy } from './finiteShapeFixture';
 
+/** Guard against a stuck run on a loaded machine (the 3-D cases take about a second); not a speed check. */
+const SLOW_CASE_TIMEOUT_MS = 60_000;
+
 const BALANCE_TOLERANCE = 1e-6;
 /** The solver resamples the tables every 0.5 K or finer (tabulateMaterial); against exact Simpson this is the allowance. */
 const INDEPENDENT_TOLERANCE = 1e-4;
@@ -68,7 +71,7 @@ const cases: [string, Shape, string, Medium, number][] = [
 
 describe('finite-volume 2-D/3-D energy balance with variable properties', () => {
   for (const [shapeName, shape, mediumName, medium, seconds] of cases) {
-    it(`${shapeName} in ${mediumName} for ${seconds} s`, () => {
+    it(`${shapeName} in ${mediumName} for ${seconds} s`, { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
       const start: Field = { kind: 'uniform', temperatureK: START_K };
       const s = solved(solveFiniteVolume2DStage(finiteProblem({ shape, material: variableAlloy, medium, start, end: { kind: 'duration', seconds } })));
       expect(s.energyRelativeError, `own balance: got ${s.energyRelativeError}, allowed ${BALANCE_TOLERANCE}`).not.toBeNull();

@@ -4,7 +4,7 @@
 // Finite-volume discretisation on vertex-centred control volumes: Patankar, Numerical Heat Transfer
 // and Fluid Flow, 1980, Secs. 4.2 and 4.6 (from memory).
 import type { FiniteAxis } from '../../geometry/geometry';
-import { controlVolumes, evenNodes, type AxisControlVolumes } from './controlVolumes';
+import { axisNodes, controlVolumes, type AxisControlVolumes } from './controlVolumes';
 
 export interface FiniteGrid {
   axes: AxisControlVolumes[];
@@ -23,8 +23,8 @@ export interface FiniteGrid {
   wholePartFactor: number;
 }
 
-export function finiteGrid(axes: FiniteAxis[], nodesPerAxis: number[]): FiniteGrid {
-  const cvs = axes.map((a, d) => controlVolumes(a.coordinate, evenNodes(a.halfLengthM, nodesPerAxis[d])));
+export function finiteGrid(axes: FiniteAxis[], nodesPerAxis: number[], stretch: number): FiniteGrid {
+  const cvs = axes.map((a, d) => controlVolumes(a.coordinate, axisNodes(a, nodesPerAxis[d], stretch)));
   const counts = cvs.map((c) => c.nodesM.length);
   const strides: number[] = [];
   let size = 1;
