@@ -176,7 +176,7 @@ export function VariantsScreen() {
         <h2>Compared</h2>
         <ComparisonTable comparison={comparison} unitSystem={unitSystem} />
         <h2>Curves</h2>
-        <p className="cs-variants-note">Main plan: every reported point. Variants: centre and surface, drawn in their own dash and marker patterns and named in the legend.</p>
+        <p className="cs-variants-note">Main plan: every reported point. Variants: centre and surface (centre only when there are more than two variants), drawn in their own dash and marker patterns and named in the legend.</p>
         {figure ? <PlotlyChart figure={figure} label={`Temperature against time, ${document.main.name} and its variants`} heightPx={460} /> : <p role="status">Waiting for the engine’s results…</p>}
       </div>
     </div>

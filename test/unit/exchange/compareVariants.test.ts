@@ -67,3 +67,14 @@ describe('swapStageMedium', () => {
     expect(out.plan.stages[0]).toEqual(demoPlanK.stages[0]);
   });
 });
+
+describe('overlaidPoints', () => {
+  it('keeps one pattern per series: centre and surface up to two variants, centre only beyond', async () => {
+    const { overlaidPoints, variantOverlaySeries, DISTINCT_EXTRA_STYLES } = await import('@/features/variants/variantOverlaySeries');
+    expect(overlaidPoints(2)).toEqual(['centre', 'surface']);
+    expect(overlaidPoints(3)).toEqual(['centre']);
+    const four = variantOverlaySeries(['a', 'b', 'c', 'd'].map((name) => ({ name, result: bathResult })));
+    expect(four.map((s) => s.name)).toEqual(['a · axis', 'b · axis', 'c · axis', 'd · axis']);
+    expect(four.length).toBeLessThanOrEqual(DISTINCT_EXTRA_STYLES);
+  });
+});
