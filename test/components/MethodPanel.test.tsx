@@ -60,6 +60,12 @@ describe('MethodPanel', () => {
     expect(fact('one-term')).toBe('not reported for this method');
     expect(fact('effort')).toBe('240 time steps, 48 cells');
   });
+
+  it('says a cross-check was skipped in a quick pass, and shows the spread between points', () => {
+    render(<MethodPanel stage={{ ...result.stages[1], crossCheck: null }} points={result.points} system="si" crossChecked={false} />);
+    expect(fact('cross-check')).toBe('skipped in the quick pass; the full run checks it');
+    expect(fact('max-point-spread')).toBe('162 K');
+  });
 });
 
 describe('stageMethodFacts', () => {

@@ -9,10 +9,12 @@ export interface MethodPanelProps {
   stage: StageResult;
   points: PlanResult['points'];
   system: UnitSystem;
+  /** PlanResult.crossChecked: false for a quick pass without cross-checks. */
+  crossChecked?: boolean;
 }
 
-export function MethodPanel({ stage, points, system }: MethodPanelProps) {
-  const facts = stageMethodFacts(stage, points, system);
+export function MethodPanel({ stage, points, system, crossChecked = true }: MethodPanelProps) {
+  const facts = stageMethodFacts(stage, points, system, crossChecked);
   const [method, ...numbers] = facts;
   return (
     <section className="method-panel" aria-labelledby={`method-panel-title-${stage.index}`}>

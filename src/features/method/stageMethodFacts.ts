@@ -48,7 +48,8 @@ function effortText(effort: StageResult['effort']): string {
   return parts.length > 0 ? parts.join(', ') : 'closed form (no steps or terms)';
 }
 
-export function stageMethodFacts(stage: StageResult, points: PlanResult['points'], system: UnitSystem): MethodFact[] {
+/** crossChecked: false when the result came from a quick pass that skipped every cross-check. */
+export function stageMethodFacts(stage: StageResult, points: PlanResult['points'], system: UnitSystem, crossChecked = true): MethodFact[] {
   const difference = (k: number) => formatQuantity('temperatureDifference', k, system);
   const lumped = biotText(stage.biot.lumped, system);
   const series = biotText(stage.biot.series, system);
@@ -70,7 +71,9 @@ export function stageMethodFacts(stage: StageResult, points: PlanResult['points'
       term: 'Cross-check',
       value: stage.crossCheck
         ? `${methodName(stage.crossCheck.method)}: largest difference ${difference(stage.crossCheck.maxDifferenceK)}, ${stage.crossCheck.maxDifferenceK <= stage.crossCheck.toleranceK ? 'within' : 'OUTSIDE'} the tolerance of ${difference(stage.crossCheck.toleranceK)}`
-        : 'none for this stage',
+        : crossChecked
+          ? 'none for this stage'
+          : 'skipped in the quick pass; the full run checks it',
     },
     {
       id: 'energy',
@@ -86,6 +89,7 @@ export function stageMethodFacts(stage: StageResult, points: PlanResult['points'
     },
     { id: 'max-rate', term: 'Largest surface cooling rate', value: formatQuantity('coolingRate', stage.maxSurfaceCoolingRateKPerS, system) },
     { id: 'max-spread', term: 'Largest centre–surface difference', value: difference(stage.maxCentreSurfaceDifferenceK) },
+    { id: 'max-point-spread', term: 'Largest spread between reported points', value: difference(stage.maxPointSpreadK), detail: 'mean excluded; an indicator of distortion and cracking risk' },
     { id: 'effort', term: 'Effort', value: effortText(stage.effort) },
   ];
   return facts;
