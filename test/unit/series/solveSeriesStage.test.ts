@@ -207,6 +207,15 @@ describe('solveSeriesStage, edge cases', () => {
     }
   });
 
+  it('a depth named only by the end condition is reported and reached', () => {
+    const s = solved(solveSeriesStage(base(PLATE, { kind: 'uniform', temperatureK: 1100 }, { kind: 'point-temperature', point: 'depth', depthM: 0.005, temperatureK: 700 })));
+    const depth = s.samples.temperaturesK.depth as Float64Array;
+    expect(Math.abs(depth[depth.length - 1] - 700), `depth at the end ${depth[depth.length - 1]}`).toBeLessThan(1e-6);
+    const bi = (800 * 0.02) / K;
+    const fo = (ALPHA * s.durationS) / 0.02 ** 2;
+    expect(Math.abs(350 + 750 * uniformStartTheta('slab', bi, 0.75, fo) - 700)).toBeLessThan(1e-6);
+  });
+
   it('refuses a start field of another shape or size with not-applicable (no throw)', () => {
     const grid: Field = { kind: 'grid-1d', geometry: 'cylinder', lengthM: 0.02, nodesM: Float64Array.of(0, 0.02), temperaturesK: Float64Array.of(900, 800) };
     const out = solveSeriesStage(base(PLATE, grid, { kind: 'duration', seconds: 10 }));

@@ -68,7 +68,8 @@ export const solveLumpedStage: StageSolver = (problem) => {
   }
 
   const ids: PointId[] = geometry.points.map((p) => p.id);
-  if (problem.depthM !== undefined && !ids.includes('depth')) ids.push('depth');
+  const depthM = problem.depthM ?? (end.kind === 'point-temperature' ? end.depthM : undefined);
+  if (depthM !== undefined && !ids.includes('depth')) ids.push('depth');
   const count = Math.max(2, problem.sampleCount);
   const curves = (values: Float64Array) => Object.fromEntries(ids.map((id) => [id, Float64Array.from(values)])) as Partial<Record<PointId, Float64Array>>;
   const timesOver = (durationS: number) => Float64Array.from({ length: count }, (_, k) => (k === count - 1 ? durationS : (k * durationS) / (count - 1)));

@@ -38,8 +38,10 @@ export const solveSeriesStage: StageSolver = (problem) => {
   if (start.kind !== 'uniform' && (start.geometry !== shape || Math.abs(start.lengthM - lengthM) > 1e-12 * lengthM)) {
     return notApplicable(`The start field belongs to a ${start.geometry} of ${start.lengthM} m, not to this ${shape} of ${lengthM} m.`);
   }
-  if (problem.depthM !== undefined && (problem.depthM < 0 || problem.depthM > lengthM)) {
-    return notApplicable(`The depth ${problem.depthM} m lies outside the part (0 to ${lengthM} m below the cooled surface).`);
+  // The reported depth: the problem's, or the end condition's when only that names one.
+  const depthM = problem.depthM ?? (end.kind === 'point-temperature' ? end.depthM : undefined);
+  if (depthM !== undefined && (depthM < 0 || depthM > lengthM)) {
+    return notApplicable(`The depth ${depthM} m lies outside the part (0 to ${lengthM} m below the cooled surface).`);
   }
 
   const propertyK = problem.propertyTemperatureK;
@@ -63,8 +65,8 @@ export const solveSeriesStage: StageSolver = (problem) => {
 
   // Reported points: position x* from the centre, or the volume mean.
   const ids: PointId[] = ['centre', 'surface', 'mean'];
-  if (problem.depthM !== undefined) ids.push('depth');
-  const xStarOf = (id: PointId) => (id === 'centre' ? 0 : id === 'surface' ? 1 : id === 'depth' ? 1 - (problem.depthM ?? 0) / lengthM : NaN);
+  if (depthM !== undefined) ids.push('depth');
+  const xStarOf = (id: PointId) => (id === 'centre' ? 0 : id === 'surface' ? 1 : id === 'depth' ? 1 - (depthM ?? 0) / lengthM : NaN);
   const startValue = (id: PointId) => (id === 'mean' ? meanTemperature(start) : temperatureAt(start, xStarOf(id) * lengthM));
 
   // Coefficients and per-point weights b_n X_n(x*), grown on demand.
