@@ -12,12 +12,13 @@ import type { StageOutcome, StageProblem, StageSolution } from '../stageProblem'
 import type { Field1D } from '../../fields';
 import type { PointId } from '@/schema/planSchema';
 import { buildVolumeGrid, gridOnNodes, areaExponentOf, type VolumeGrid } from './buildVolumeGrid';
-import { tabulateMaterial, evaluateMaterial } from './tabulateMaterial';
+import { tabulateMaterial } from './tabulateMaterial';
 import { createTrBdf2Stepper, type TrBdf2Stepper } from './trBdf2Stepper';
 import { createPointHistory, recordPoints, samplePoint } from './pointHistory';
 import { sizeGrid } from './sizeGrid';
 import { equilibriumTemperature } from './equilibriumTemperature';
 import { temperatureAt } from '../series/evaluateField1D';
+import { KELVIN_OFFSET } from '@/schema/planTemperatures';
 
 /** Share of the tolerance given to the local time error of one step (the rest to space and accumulation). Common practice. */
 const TIME_TOLERANCE_FRACTION = 0.1;
@@ -121,7 +122,7 @@ function atLeastAsFine(nodes: Float64Array, needed: Float64Array): boolean {
   return nodes.length >= 2 && widest(nodes) <= widest(needed) * (1 + 1e-9) && surface(nodes) <= surface(needed) * (1 + 1e-9);
 }
 
-const kelvin = (t: number) => `${t.toFixed(2)} K`;
+const kelvin = (t: number) => `${t.toFixed(2)} K (${(t - KELVIN_OFFSET).toFixed(2)} °C)`;
 
 export function solveFiniteVolumeStage(problem: StageProblem): StageOutcome {
   return solveFiniteVolumeStageWith(problem, {});

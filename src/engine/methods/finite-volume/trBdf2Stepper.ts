@@ -34,19 +34,14 @@ const CAPACITY_FEATURE_FRACTION = 0.05;
 export type StepAttempt = { ok: true; errorK: number } | { ok: false; reason: 'newton' | 'capacity-peak' };
 
 export interface TrBdf2Stepper {
-  readonly n: number;
   /** Accepted state: temperatures, net inflow F (W in grid units), capacities C, enthalpies e. */
   readonly temperatureK: Float64Array;
   readonly inflow: Float64Array;
   readonly capacity: Float64Array;
   readonly enthalpy: Float64Array;
-  /** Trial state after `attempt`. */
+  /** Trial temperatures after `attempt`. */
   readonly trialTemperatureK: Float64Array;
-  readonly trialInflow: Float64Array;
-  readonly trialCapacity: Float64Array;
-  readonly trialEnthalpy: Float64Array;
-  /** Surface heat flow of the accepted state and the trial's heat out over the step (grid units, J). */
-  surfaceHeatFlow(): number;
+  /** Heat out through the surface over the trial step (grid units, J). */
   trialHeatOut(): number;
   /** Sets the accepted state (computes F, C, e). Returns false if the temperatures are not finite. */
   setState(temperatureK: Float64Array): boolean;
@@ -146,16 +141,11 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   }
 
   const stepper: TrBdf2Stepper = {
-    n,
     get temperatureK() { return t0; },
     get inflow() { return f0; },
     get capacity() { return c0; },
     get enthalpy() { return e0; },
     get trialTemperatureK() { return t1; },
-    get trialInflow() { return f1; },
-    get trialCapacity() { return c1; },
-    get trialEnthalpy() { return e1; },
-    surfaceHeatFlow: () => surfaceArea * q0,
     // Heat out over the trial step: the same weighted sum of surface flows the enthalpy update used.
     trialHeatOut: () => lastStepS * surfaceArea * (W * q0 + W * qg + D * q1),
     setState(temperatureK) {
