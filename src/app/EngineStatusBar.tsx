@@ -1,4 +1,5 @@
-// How the computation stands: up to date, computing (with progress and Stop), stopped, or failed.
+// How the computation stands: up to date, computing (with progress and Stop), quick results shown
+// while the cross-check runs, stopped, or failed. Told in words, not by colour alone.
 import { useAppStore } from '@/state/useAppStore';
 
 export function EngineStatusBar({ onStop, onRecompute }: { onStop: () => void; onRecompute: () => void }) {
@@ -7,11 +8,13 @@ export function EngineStatusBar({ onStop, onRecompute }: { onStop: () => void; o
   const progress = useAppStore((s) => s.progress);
   const lastRunMs = useAppStore((s) => s.lastRunMs);
   const stale = useAppStore((s) => s.shownRunId !== s.requestedRunId);
+  const complete = useAppStore((s) => s.resultsComplete);
+  const ms = lastRunMs === null ? '' : ` (computed in ${Math.round(lastRunMs)} ms)`;
   return (
     <div className={`engine-status is-${status}`} role="status" aria-live="polite">
       {status === 'running' && (
         <>
-          <span>Computing…</span>
+          <span>{stale ? 'Computing…' : 'Results shown; cross-checking every stage with a second method…'}</span>
           {progress !== null && <progress max={1} value={progress} aria-label="Computation progress" />}
           {progress !== null && <span>{Math.round(progress * 100)} %</span>}
           <button type="button" onClick={onStop}>
@@ -19,11 +22,11 @@ export function EngineStatusBar({ onStop, onRecompute }: { onStop: () => void; o
           </button>
         </>
       )}
-      {status === 'idle' && !stale && <span>✔ Results up to date{lastRunMs !== null ? ` (computed in ${Math.round(lastRunMs)} ms)` : ''}</span>}
-      {status === 'idle' && stale && <span>Waiting for results…</span>}
+      {status === 'idle' && !stale && complete && <span>✔ Results up to date and cross-checked{ms}</span>}
+      {status === 'idle' && (stale || !complete) && <span>Waiting for results…</span>}
       {status === 'stopped' && (
         <>
-          <span>■ Stopped: the results shown are for an earlier version of the plan.</span>
+          <span>{stale ? '■ Stopped: the results shown are for an earlier version of the plan.' : '■ Stopped: the results shown are not cross-checked.'}</span>
           <button type="button" onClick={onRecompute}>
             Compute again
           </button>

@@ -1,7 +1,7 @@
 // What the engine worker last returned, and how the current computation is going.
 import type { StateCreator } from 'zustand/vanilla';
 import type { PlanResult } from '@/engine/plan/planResult';
-import type { EngineStatus } from '@/worker/createEngineClient';
+import type { EngineStatus, ResultInfo } from '@/worker/createEngineClient';
 import type { PlanRunResult } from '@/worker/engineMessages';
 import type { AppState } from './appState';
 
@@ -16,8 +16,10 @@ export interface ResultsSlice {
   shownRunId: number | null;
   requestedRunId: number | null;
   lastRunMs: number | null;
+  /** False while the shown results are the quick pass, before every stage has been cross-checked. */
+  resultsComplete: boolean;
   runRequested(runId: number): void;
-  receiveResults(results: PlanRunResult[], info: { runId: number; elapsedMs: number }): void;
+  receiveResults(results: PlanRunResult[], info: ResultInfo): void;
   setEngineStatus(status: EngineStatus, message?: string): void;
   setProgress(fraction: number): void;
 }
@@ -30,11 +32,12 @@ export const createResultsSlice: StateCreator<AppState, [], [], ResultsSlice> = 
   shownRunId: null,
   requestedRunId: null,
   lastRunMs: null,
+  resultsComplete: false,
   runRequested(runId) {
     set({ requestedRunId: runId });
   },
-  receiveResults(list, { runId, elapsedMs }) {
-    set({ results: Object.fromEntries(list.map((r) => [r.id, r.result])), shownRunId: runId, lastRunMs: elapsedMs, progress: null });
+  receiveResults(list, { runId, elapsedMs, complete }) {
+    set({ results: Object.fromEntries(list.map((r) => [r.id, r.result])), shownRunId: runId, lastRunMs: elapsedMs, resultsComplete: complete, ...(complete ? { progress: null } : {}) });
   },
   setEngineStatus(status, message) {
     set({ engineStatus: status, engineMessage: message ?? null, ...(status === 'running' ? {} : { progress: null }) });

@@ -1,7 +1,9 @@
 // The UI side of the engine worker. The latest request wins: at most one run is in the worker
 // and at most one waits behind it (newer requests replace the waiting one). Replies of a run that
-// a newer request superseded are dropped. A superseded run still going after SUPERSEDE_GRACE_MS,
-// or any run when the user presses Stop, is ended by terminating the worker and starting a new one.
+// a newer request superseded are dropped. Each run answers twice: a quick pass (shown at once) and
+// the full, cross-checked pass. A superseded run that is already in its full pass, one still going
+// after SUPERSEDE_GRACE_MS, and any run when the user presses Stop, is ended by terminating the
+// worker and starting a new one.
 import type { PlanK } from '@/schema/planSchema';
 import { engineResponseSchema, type EngineRequest, type PlanRunResult } from './engineMessages';
 
@@ -17,8 +19,15 @@ export interface WorkerLike {
 
 export type EngineStatus = 'idle' | 'running' | 'stopped' | 'error';
 
+export interface ResultInfo {
+  runId: number;
+  elapsedMs: number;
+  /** False for the quick pass (no cross-checks); the full pass follows. */
+  complete: boolean;
+}
+
 export interface EngineClientEvents {
-  onResults(results: PlanRunResult[], info: { runId: number; elapsedMs: number }): void;
+  onResults(results: PlanRunResult[], info: ResultInfo): void;
   onProgress(fraction: number): void;
   onStatus(status: EngineStatus, message?: string): void;
 }
@@ -35,6 +44,8 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
   let worker: WorkerLike | null = null;
   let nextRunId = 1;
   let inFlight: number | null = null;
+  /** True once the run in the worker has sent its quick pass and is doing the full one. */
+  let inFullPass = false;
   let waiting: Extract<EngineRequest, { kind: 'run' }> | null = null;
   let graceTimer: ReturnType<typeof setTimeout> | null = null;
 
@@ -45,6 +56,7 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
 
   function send(request: Extract<EngineRequest, { kind: 'run' }>) {
     inFlight = request.runId;
+    inFullPass = false;
     ensureWorker().postMessage(request);
     events.onStatus('running');
   }
@@ -79,7 +91,11 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
         if (!superseded) events.onProgress(reply.fraction);
         return;
       case 'result':
-        if (!superseded) events.onResults(reply.results, { runId: reply.runId, elapsedMs: reply.elapsedMs });
+        if (!superseded) events.onResults(reply.results, { runId: reply.runId, elapsedMs: reply.elapsedMs, complete: reply.complete });
+        if (!reply.complete) {
+          inFullPass = true;
+          return;
+        }
         break;
       case 'error':
         if (!superseded) events.onStatus('error', reply.message);
@@ -115,6 +131,14 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
         return request.runId;
       }
       waiting = request;
+      if (inFullPass) {
+        // The quick answer is out; the check of an outdated plan is not worth waiting for.
+        restartWorker();
+        clearGrace();
+        waiting = null;
+        send(request);
+        return request.runId;
+      }
       worker?.postMessage({ kind: 'cancel', runId: inFlight });
       if (graceTimer === null) {
         graceTimer = setTimeout(() => {

@@ -33,7 +33,14 @@ export interface PlanRunResult {
 }
 
 export const engineResponseSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('result'), runId: runIdSchema, elapsedMs: z.number(), results: z.array(z.object({ id: z.string(), result: z.custom<PlanResult>((r) => typeof r === 'object' && r !== null) })) }),
+  z.object({
+    kind: z.literal('result'),
+    runId: runIdSchema,
+    /** False for the quick first pass (no cross-checks); the full pass follows with true. */
+    complete: z.boolean(),
+    elapsedMs: z.number(),
+    results: z.array(z.object({ id: z.string(), result: z.custom<PlanResult>((r) => typeof r === 'object' && r !== null) })),
+  }),
   z.object({ kind: z.literal('progress'), runId: runIdSchema, fraction: z.number().min(0).max(1) }),
   z.object({ kind: z.literal('cancelled'), runId: runIdSchema }),
   z.object({ kind: z.literal('error'), runId: runIdSchema.nullable(), message: z.string() }),

@@ -44,7 +44,11 @@ class FakeWorker implements WorkerLike {
     if (message.kind !== 'run') return;
     this.runs.push(message);
     if (FakeWorker.hold) return;
-    queueMicrotask(() => this.onmessage?.({ data: { kind: 'result', runId: message.runId, elapsedMs: 4, results: [{ id: 'main', result: quenchedShaftResult }] } } as MessageEvent));
+    const reply = (complete: boolean) => this.onmessage?.({ data: { kind: 'result', runId: message.runId, complete, elapsedMs: 4, results: [{ id: 'main', result: quenchedShaftResult }] } } as MessageEvent);
+    queueMicrotask(() => {
+      reply(false);
+      reply(true);
+    });
   }
   terminate() {
     this.terminated = true;
@@ -78,7 +82,7 @@ describe('workbench shell', () => {
     expect(worker.runs[0].plans[0].id).toBe('main');
     expect(worker.runs[0].plans[0].plan.temperatureUnit).toBe('K');
     expect(stageBlocks()[1].textContent).toMatch(/takes 3 min 03 s/);
-    expect(screen.getByText(/Results up to date \(computed in 4 ms\)/)).toBeTruthy();
+    expect(screen.getByText(/Results up to date and cross-checked \(computed in 4 ms\)/)).toBeTruthy();
   });
 
   it('an h edit is sent to the worker; Ctrl+Z takes it back and sends the old plan again', async () => {

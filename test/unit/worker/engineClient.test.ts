@@ -59,7 +59,7 @@ describe('engine client', () => {
   it('shows the result of a single run and goes idle', () => {
     const { client, workers, shown, statuses } = setup();
     const id = client.run([{ id: 'main', plan }]);
-    workers[0].reply({ kind: 'result', runId: id, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('first') }] });
+    workers[0].reply({ kind: 'result', runId: id, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('first') }] });
     expect(shown).toEqual(['first']);
     expect(statuses).toEqual(['running', 'idle']);
   });
@@ -72,10 +72,10 @@ describe('engine client', () => {
     const w = workers[0];
     // First run posted, then one cancel per superseding request; the waiting request is not posted yet.
     expect(w.posted.map((m) => m.kind)).toEqual(['run', 'cancel', 'cancel']);
-    w.reply({ kind: 'result', runId: first, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('stale') }] });
+    w.reply({ kind: 'result', runId: first, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('stale') }] });
     expect(shown).toEqual([]);
     expect(w.lastRunId()).toBe(third);
-    w.reply({ kind: 'result', runId: third, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('latest') }] });
+    w.reply({ kind: 'result', runId: third, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('latest') }] });
     expect(shown).toEqual(['latest']);
   });
 
@@ -90,8 +90,8 @@ describe('engine client', () => {
     expect(workers).toHaveLength(2);
     expect(workers[1].lastRunId()).toBe(second);
     // A late reply from the dead worker's run is not shown.
-    workers[0].reply({ kind: 'result', runId: first, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('dead') }] });
-    workers[1].reply({ kind: 'result', runId: second, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('fresh') }] });
+    workers[0].reply({ kind: 'result', runId: first, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('dead') }] });
+    workers[1].reply({ kind: 'result', runId: second, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('fresh') }] });
     expect(shown).toEqual(['fresh']);
   });
 
@@ -102,11 +102,34 @@ describe('engine client', () => {
     client.stop();
     expect(workers[0].terminated).toBe(true);
     expect(statuses.at(-1)).toBe('stopped');
-    workers[0].reply({ kind: 'result', runId: id, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('late') }] });
+    workers[0].reply({ kind: 'result', runId: id, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('late') }] });
     expect(shown).toEqual([]);
     // The next request gets a fresh worker.
     const next = client.run([{ id: 'main', plan }]);
     expect(workers[1].lastRunId()).toBe(next);
+  });
+
+  it('shows the quick pass at once and the full pass after it, idle only after the full one', () => {
+    const { client, workers, shown, statuses } = setup();
+    const id = client.run([{ id: 'main', plan }]);
+    workers[0].reply({ kind: 'result', runId: id, complete: false, elapsedMs: 1, results: [{ id: 'main', result: resultNamed('quick') }] });
+    expect(shown).toEqual(['quick']);
+    expect(statuses).toEqual(['running']);
+    workers[0].reply({ kind: 'result', runId: id, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('checked') }] });
+    expect(shown).toEqual(['quick', 'checked']);
+    expect(statuses).toEqual(['running', 'idle']);
+  });
+
+  it('a new request during the full pass restarts the worker at once instead of waiting for the check', () => {
+    const { client, workers, shown } = setup();
+    const first = client.run([{ id: 'main', plan }]);
+    workers[0].reply({ kind: 'result', runId: first, complete: false, elapsedMs: 1, results: [{ id: 'main', result: resultNamed('quick one') }] });
+    const second = client.run([{ id: 'main', plan }]);
+    expect(workers[0].terminated).toBe(true);
+    expect(workers[1].lastRunId()).toBe(second);
+    workers[0].reply({ kind: 'result', runId: first, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('old check') }] });
+    workers[1].reply({ kind: 'result', runId: second, complete: false, elapsedMs: 1, results: [{ id: 'main', result: resultNamed('quick two') }] });
+    expect(shown).toEqual(['quick one', 'quick two']);
   });
 
   it('passes progress of the current run and an engine error as an error status', () => {

@@ -21,18 +21,25 @@ function harness(runPlan: RunPlanFn, clock = { ms: 0 }) {
 const echoName: RunPlanFn = (p: PlanK) => ({ planName: p.name }) as PlanResult;
 
 describe('engine worker handler', () => {
-  it('returns one result per plan, keyed by id', async () => {
-    const { handle, replies } = harness(echoName);
+  it('answers twice, quick pass without cross-checks then the full pass, one result per plan keyed by id', async () => {
+    const calls: (boolean | undefined)[] = [];
+    const { handle, replies } = harness((p, options) => {
+      calls.push(options?.crossCheck);
+      return echoName(p);
+    });
     await handle({ kind: 'run', runId: 7, plans: [{ id: 'main', plan }, { id: 'v1', plan: { ...plan, name: 'variant one' } }] });
-    expect(replies).toHaveLength(1);
-    const reply = replies[0];
-    expect(reply.kind).toBe('result');
-    if (reply.kind !== 'result') return;
-    expect(reply.runId).toBe(7);
-    expect(reply.results.map((r) => [r.id, r.result.planName])).toEqual([
-      ['main', plan.name],
-      ['v1', 'variant one'],
+    expect(calls).toEqual([false, false, true, true]);
+    expect(replies.map((r) => (r.kind === 'result' ? [r.runId, r.complete] : r.kind))).toEqual([
+      [7, false],
+      [7, true],
     ]);
+    for (const reply of replies) {
+      if (reply.kind !== 'result') continue;
+      expect(reply.results.map((r) => [r.id, r.result.planName])).toEqual([
+        ['main', plan.name],
+        ['v1', 'variant one'],
+      ]);
+    }
   });
 
   it('refuses a plan that fails the plan schema, naming the field', async () => {
@@ -67,6 +74,24 @@ describe('engine worker handler', () => {
     expect(replies).toEqual([{ kind: 'cancelled', runId: 1 }]);
   });
 
+  it('a cancel after the quick pass stops the full pass', async () => {
+    const { handle, replies } = harness(echoName);
+    const running = handle({ kind: 'run', runId: 5, plans: [{ id: 'main', plan }] });
+    await handle({ kind: 'cancel', runId: 5 });
+    await running;
+    expect(replies.map((r) => (r.kind === 'result' ? `result complete=${r.complete}` : r.kind))).toEqual(['result complete=false', 'cancelled']);
+  });
+
+  it('an engine AbortError is a cancellation, not an error', async () => {
+    const { handle, replies } = harness(() => {
+      const e = new Error('The computation was stopped.');
+      e.name = 'AbortError';
+      throw e;
+    });
+    await handle({ kind: 'run', runId: 6, plans: [{ id: 'main', plan }] });
+    expect(replies).toEqual([{ kind: 'cancelled', runId: 6 }]);
+  });
+
   it('sends progress at most once per interval, scaled over the plans of the run', async () => {
     const clock = { ms: 0 };
     const { handle, replies } = harness((p, options) => {
@@ -78,9 +103,11 @@ describe('engine worker handler', () => {
     }, clock);
     await handle({ kind: 'run', runId: 2, plans: [{ id: 'main', plan }, { id: 'v1', plan }] });
     const fractions = replies.filter((r) => r.kind === 'progress').map((r) => (r.kind === 'progress' ? r.fraction : NaN));
-    // Calls at t = 0, 25, 50 ms (plan 1: overall 0, 0.25, 0.5) and 75, 100, 125 ms (plan 2: 0.5, 0.75, 1);
-    // only calls at least 50 ms after the last one sent go out: t = 0, 50, 100.
-    expect(fractions).toEqual([0, 0.5, 0.75]);
+    // Each runPlan call reports 0, 0.5, 1 at 25 ms steps: 12 calls at t = 0, 25, ..., 275 ms. The quick pass
+    // fills [0, 0.25] and the full pass [0.25, 1], each split over the 2 plans, so the overall fractions are
+    //   quick: 0, 0.0625, 0.125 | 0.125, 0.1875, 0.25    full: 0.25, 0.4375, 0.625 | 0.625, 0.8125, 1.
+    // Only calls at least 50 ms after the last one sent go out: t = 0, 50, 100, ..., 250 ms.
+    expect(fractions).toEqual([0, 0.125, 0.1875, 0.25, 0.625, 0.8125]);
   });
 
   it('turns an exception in the engine into an error reply', async () => {
