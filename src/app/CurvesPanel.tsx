@@ -6,12 +6,13 @@ import { ProfileChart } from '@/features/charts/ProfileChart';
 import { CoolingRateChart } from '@/features/charts/CoolingRateChart';
 import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { useAppStore } from '@/state/useAppStore';
+import { useSameCurvesResult } from './useSameCurvesResult';
 
 const HISTORY_HEIGHT_PX = 340;
 const SMALL_CHART_HEIGHT_PX = 260;
 
 export function CurvesPanel() {
-  const result = useAppStore((s) => s.results[MAIN_PLAN_ID] ?? null);
+  const result = useSameCurvesResult(useAppStore((s) => s.results[MAIN_PLAN_ID] ?? null));
   const plan = useAppStore((s) => s.document.main);
   const system = useAppStore((s) => s.unitSystem);
   const targets = useMemo(() => planChartTargets(plan), [plan]);
