@@ -174,6 +174,19 @@ describe('solveLumpedStage, tabulated h and other start fields', () => {
     expect((s.samples.temperaturesK.corner as Float64Array | undefined)?.[0] ?? (s.samples.temperaturesK.edge as Float64Array)[0]).toBeCloseTo(910, 9);
   });
 
+  it('starts from the volume mean of a product field: offset + weight x product of axis means', () => {
+    const shape: Shape = { kind: 'bar', halfWidthM: 0.02, halfHeightM: 0.01 };
+    // One separable term: factor x is a flat 1, factor y is 0.2 + 0.6 cos(1.1 y/b), whose mean is 0.2 + 0.6 sin(1.1)/1.1.
+    const factors = [
+      { offset: 1, eigenvalues: new Float64Array(0), amplitudes: new Float64Array(0) },
+      { offset: 0.2, eigenvalues: Float64Array.of(1.1), amplitudes: Float64Array.of(0.6) },
+    ];
+    const start = { kind: 'product' as const, axes: [{ geometry: 'slab' as const, lengthM: 0.02 }, { geometry: 'slab' as const, lengthM: 0.01 }], offsetK: 300, terms: [{ weightK: 500, factors }] };
+    const expected = 300 + 500 * (0.2 + (0.6 * Math.sin(1.1)) / 1.1);
+    const s = solved(solveLumpedStage(stageProblem({ shape, kWPerMK: 30, rhoKgPerM3: 7800, cJPerKgK: 500, hWPerM2K: 50, mediumK: 300, start, end: { kind: 'duration', seconds: 10 } })));
+    expect((s.samples.temperaturesK.mean as Float64Array)[0]).toBeCloseTo(expected, 9);
+  });
+
   it('stops when asked (abort signal)', () => {
     const controller = new AbortController();
     controller.abort();
