@@ -72,6 +72,8 @@ describe('StageSheet', () => {
     const comparison = screen.getByTestId('comparison-table');
     expect(within(comparison).getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Figure', 'Pin 40 mm, air then hold', 'Bath instead of hold']);
     expect(screen.getByTestId('sheet-assumptions').textContent).toContain('infinitely long');
+    // The fixture result says it was not cross-checked (crossChecked: false).
+    expect(screen.getByTestId('sheet-assumptions').textContent).toContain('not cross-checked by a second method');
     const cautions = screen.getByTestId('sheet-cautions').textContent ?? '';
     for (const c of STAGE_SHEET_CAUTIONS) expect(cautions).toContain(c.topic);
     expect(cautions).toContain('Entry caution from the library.');

@@ -55,7 +55,9 @@ export function SheetPage() {
   const meta = document.sheet ?? EMPTY_SHEET_META;
   const todayIso = new Date().toISOString().slice(0, 10);
   const entryCautions = useMemo(() => sheetEntryCautions([document.main, ...document.variants.map((v) => v.plan)]), [document]);
-  const ready = Boolean(main && chartSvg) && document.variants.every((v) => results[v.id]);
+  // A sheet is handed on: it waits for the full (cross-checked) pass of every plan, not the quick one.
+  const planResults = [main, ...document.variants.map((v) => results[v.id])];
+  const ready = Boolean(chartSvg) && planResults.every((r) => r?.crossChecked);
 
   return (
     <div className="cs-sheet-page" data-testid="sheet-page" data-ready={ready ? 'yes' : 'no'} data-paper={paper}>
@@ -78,7 +80,7 @@ export function SheetPage() {
         <button type="button" onClick={() => window.print()} disabled={!ready}>
           Print or save as PDF
         </button>
-        {!ready ? <span role="status">Waiting for the results and the chart…</span> : null}
+        {!ready ? <span role="status">Waiting for the cross-checked results and the chart…</span> : null}
       </div>
       <StageSheet document={document} results={results} unitSystem={unitSystem} chartSvg={chartSvg} todayIso={todayIso} entryCautions={entryCautions} />
     </div>

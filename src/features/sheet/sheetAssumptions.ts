@@ -43,5 +43,6 @@ export function sheetAssumptions(plan: PlanK, result: PlanResult | undefined): s
     radiation,
     'Heat released or absorbed by phase changes in the part appears only through the specific heat given; transformations, stresses and hardness are not computed.',
     `Methods used: ${methods}.`,
+    ...(result && !result.crossChecked ? ['These results come from a quick pass: the stages were not cross-checked by a second method. Let the full computation finish before printing a sheet to hand on.'] : []),
   ];
 }

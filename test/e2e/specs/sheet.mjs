@@ -52,6 +52,7 @@ async function printAndCheck(page, paper, expected) {
   const all = squash(pdf.texts.join('\n'));
   const missing = [...expected.stages, ...expected.warnings, ...expected.cautions, ...expected.always].filter((t) => !all.includes(squash(t)));
   if (missing.length) throw new Error(`${where}: missing from the text:\n  ${missing.join('\n  ')}`);
+  if (all.includes(squash('not cross-checked by a second method'))) throw new Error(`${where}: printed from the quick pass, before the cross-checked results`);
   const controls = ['Print or save as PDF', 'Back to the workbench', 'Share link', 'Export CSV'].filter((t) => all.includes(squash(t)));
   if (controls.length) throw new Error(`${where}: screen controls printed: ${controls.join(', ')}`);
   if (pdf.xMax > pdf.widthPt - EDGE_ALLOWANCE_PT) throw new Error(`${where}: text reaches x = ${pdf.xMax} pt on a ${pdf.widthPt} pt page (cut off at the right)`);

@@ -57,6 +57,7 @@ export const airResult: PlanResult = {
   ],
   failure: null,
   totalDurationS: 1820,
+  crossChecked: false,
   warnings: [],
 };
 
