@@ -70,7 +70,7 @@ describe('uniform-start exact series', () => {
 
   it('one-term within 2% of exact at the centre and the mean for Fo > 0.2 (common practice); surface error reported', () => {
     const ONE_TERM_RELATIVE = 0.02;
-    const surfaceErrors: string[] = [];
+    const surfaceErrors: { label: string; error: number }[] = [];
     for (const g of GEOMETRIES) {
       for (const bi of [0.1, 1, 10, 100]) {
         const oneTerm = oneTermApproximation(g, bi);
@@ -81,13 +81,16 @@ describe('uniform-start exact series', () => {
           const m = Math.abs(oneTerm.meanTheta(fo) / exactM - 1);
           expect(c, `${g} Bi=${bi} Fo=${fo}: centre one-term rel. error ${c}`).toBeLessThan(ONE_TERM_RELATIVE);
           expect(m, `${g} Bi=${bi} Fo=${fo}: mean one-term rel. error ${m}`).toBeLessThan(ONE_TERM_RELATIVE);
-          if (fo === 0.21) surfaceErrors.push(`${g} Bi=${bi}: ${(Math.abs(oneTerm.theta(1, fo) - uniformStartTheta(g, bi, 1, fo))).toExponential(2)}`);
+          if (fo === 0.21) surfaceErrors.push({ label: `${g} Bi=${bi}`, error: Math.abs(oneTerm.theta(1, fo) - uniformStartTheta(g, bi, 1, fo)) });
         }
       }
     }
     // Reported, not assumed: absolute surface theta error of the one-term form at Fo = 0.21.
-    console.info(`one-term surface |theta error| at Fo = 0.21: ${surfaceErrors.join('; ')}`);
-    expect(surfaceErrors.length).toBe(12);
+    console.info(`one-term surface |theta error| at Fo = 0.21: ${surfaceErrors.map((e) => `${e.label}: ${e.error.toExponential(2)}`).join('; ')}`);
+    // The surface is where the dropped terms matter most: larger than at the centre, yet still below 2% of the excess.
+    for (const { label, error } of surfaceErrors) {
+      expect(error > 0 && error < 0.02, `${label}: surface one-term error ${error}`).toBe(true);
+    }
   });
 
   it('Incropera 6th ed. Example 5.4 (pipeline wall heated by oil, from memory): T(0) = 42.9 °C, T(L) = 45.2 °C after 8 min', () => {
