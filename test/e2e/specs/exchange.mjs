@@ -1,7 +1,7 @@
 // Files, links and exports in Chromium: plan -> file -> plan and plan -> link -> plan unchanged,
 // CSV columns and units, PNG and SVG images, and every bad file or link refused with its fields
 // named while the plan stays as it was.
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 
 /** Start from the bundled demo plan (a version-1 file), whatever an earlier spec left in the autosave. */
 const DEMO_PLAN = readFileSync(new URL('../../../src/library/plans/demo-plan.json', import.meta.url), 'utf8');
@@ -86,6 +86,8 @@ export async function run({ page, baseUrl, shot, context }) {
   // PNG and SVG of the chart.
   const png = await download(page, () => page.getByRole('button', { name: 'PNG', exact: true }).click());
   if (!png.name.endsWith('.png') || png.bytes.subarray(0, 4).toString('hex') !== '89504e47' || png.bytes.length < 10_000) throw new Error(`PNG: ${png.name}, ${png.bytes.length} bytes, starts ${png.bytes.subarray(0, 4).toString('hex')}`);
+  // Kept beside the screenshots for a person to look at.
+  writeFileSync(new URL('../out/exchange-chart.png', import.meta.url), png.bytes);
   const svg = await download(page, () => page.getByRole('button', { name: 'SVG', exact: true }).click());
   const svgText = svg.bytes.toString('utf8');
   if (!svg.name.endsWith('.svg') || !svgText.startsWith('<svg') || !svgText.includes('Temperature (') || !svgText.includes('js-line')) throw new Error(`SVG: ${svg.name}, starts ${svgText.slice(0, 60)}`);
