@@ -64,6 +64,8 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   const tPrev = arr();
   let prevStepS = 0;
   const maxNewtonMoveK = Math.max(highK - lowK, 1);
+  // One interval means constant properties: e is linear in T and no capacity peak can be stepped over.
+  const capacityVaries = table.intervals > 1;
 
   /** F, C, e and the Jacobian V C - a dF/dT at T into (f, c, e, lower/diag/upper); returns the surface flux. */
   function evaluate(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number): number {
@@ -175,7 +177,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       }
       const q1New = solveStage(t1, f1, c1, e1, a);
       if (q1New === null) return { ok: false, reason: 'newton' };
-      if (peakSkipped(t0, c0, e0, tg, cg, eg) || peakSkipped(tg, cg, eg, t1, c1, e1)) return { ok: false, reason: 'capacity-peak' };
+      if (capacityVaries && (peakSkipped(t0, c0, e0, tg, cg, eg) || peakSkipped(tg, cg, eg, t1, c1, e1))) return { ok: false, reason: 'capacity-peak' };
       qg = qgNew;
       q1 = q1New;
       // Embedded error, filtered with the Jacobian of the last stage (still in lower/diag/upper).
