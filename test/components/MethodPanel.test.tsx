@@ -70,9 +70,15 @@ describe('MethodPanel', () => {
 
 describe('stageMethodFacts', () => {
   it('marks a cross-check outside its tolerance in capitals', () => {
-    const stage = { ...result.stages[0], crossCheck: { method: 'series' as const, maxDifferenceK: 2.5, toleranceK: 0.5 } };
+    const stage = { ...result.stages[0], crossCheck: { method: 'series' as const, refined: false, maxDifferenceK: 2.5, toleranceK: 0.5 } };
     const crossCheck = stageMethodFacts(stage, result.points, 'si').find((f) => f.id === 'cross-check');
     expect(crossCheck?.value).toBe('Exact series: largest difference 2.5 K, OUTSIDE the tolerance of 0.5 K');
+  });
+
+  it('says when the cross-check was a re-run of the same method at a tenth of the tolerance', () => {
+    const stage = { ...result.stages[0], crossCheck: { method: 'finite-volume' as const, refined: true, maxDifferenceK: 0.004, toleranceK: 0.02 } };
+    const crossCheck = stageMethodFacts(stage, result.points, 'si').find((f) => f.id === 'cross-check');
+    expect(crossCheck?.value).toMatch(/^Finite volume \(re-run at a tenth of the tolerance\): largest difference/i);
   });
 });
 

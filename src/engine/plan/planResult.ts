@@ -41,7 +41,8 @@ export interface StageResult {
   heatBasis: Geometry['basis'];
   /** The one-term approximation against the exact series, where the series was used. */
   oneTermErrorK: { centre: number; surface: number; mean: number; fromFo: number } | null;
-  crossCheck: { method: MethodId; maxDifferenceK: number; toleranceK: number } | null;
+  /** The second computation of the stage: its method (refined = the same method re-run at a tenth of the tolerance) and the largest difference. */
+  crossCheck: { method: MethodId; refined: boolean; maxDifferenceK: number; toleranceK: number } | null;
   energyRelativeError: number | null;
   /** Largest cooling rate at the surface over the stage, K/s (positive when cooling). */
   maxSurfaceCoolingRateKPerS: number;

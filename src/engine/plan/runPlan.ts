@@ -157,7 +157,7 @@ function runStage(stage: Stage, index: number, start: Field, startTimeS: number,
   const cross = !ctx.crossCheck ? null : ctx.solvers[selection.crossCheck.method](problem({ end: { kind: 'duration', seconds: Math.max(sol.durationS, Number.MIN_VALUE) }, toleranceK: crossTolerance, propertyTemperatureK }));
   // Both methods meet the tolerance, so they may differ by twice it; lumped is allowed its accuracy limit.
   const allowedK = selection.method === 'lumped' ? lumpedAccuracyLimitK : 2 * toleranceK;
-  const crossCheck = cross?.ok && sol.durationS > 0 ? { method: cross.solution.method, maxDifferenceK: maxSampleDifference(sol.samples, cross.solution.samples), toleranceK: allowedK } : null;
+  const crossCheck = cross?.ok && sol.durationS > 0 ? { method: cross.solution.method, refined: selection.crossCheck.refined, maxDifferenceK: maxSampleDifference(sol.samples, cross.solution.samples), toleranceK: allowedK } : null;
 
   const endK = fieldAtPoints(sol.endField, geometry, depthM);
   const measures = curveMeasures(sol.samples);
@@ -195,7 +195,7 @@ function runStage(stage: Stage, index: number, start: Field, startTimeS: number,
     lumpedErrorK: selection.method === 'lumped' ? lumpedErrorK : null,
     lumpedAccuracyLimitK,
     oneTermErrorK: oneTerm ? { centre: oneTerm.centreK, surface: oneTerm.surfaceK, mean: oneTerm.meanK } : null,
-    crossCheck: crossCheck ? { method: crossCheck.method, maxDifferenceK: crossCheck.maxDifferenceK, allowedK } : null,
+    crossCheck: crossCheck ? { method: crossCheck.method, refined: crossCheck.refined, maxDifferenceK: crossCheck.maxDifferenceK, allowedK } : null,
     energyRelativeError: sol.energyRelativeError,
     timeSteps: sol.effort.steps ?? null,
     endKind: end.kind,

@@ -123,7 +123,7 @@ export const VALIDITY_RULES: ValidityRule[] = [
     severity: 'warning',
     rule: 'Every stage is computed a second way; the two should agree within the method’s stated accuracy.',
     trips: (f) => f.crossCheck !== null && f.crossCheck.maxDifferenceK > f.crossCheck.allowedK,
-    message: (f) => `The ${f.method} result and the ${f.crossCheck!.method} cross-check differ by up to ${fmt(f.crossCheck!.maxDifferenceK)} K (allowed ${fmt(f.crossCheck!.allowedK)} K).`,
+    message: (f) => `The ${f.method} result and its cross-check (${f.crossCheck!.refined ? `${f.crossCheck!.method} re-run at a tenth of the tolerance` : f.crossCheck!.method}) differ by up to ${fmt(f.crossCheck!.maxDifferenceK)} K (allowed ${fmt(f.crossCheck!.allowedK)} K).`,
     advice: (f) => (f.method === 'lumped' ? 'The part is not at one temperature here: use the finite-volume method.' : 'Tighten the tolerance or force the finite-volume method, and compare again.'),
     numbers: (f) => ({ maxDifferenceK: f.crossCheck?.maxDifferenceK ?? 0, allowedK: f.crossCheck?.allowedK ?? 0 }),
   },

@@ -34,7 +34,7 @@ export interface StageFacts {
   lumpedErrorK: number | null;
   lumpedAccuracyLimitK: number;
   oneTermErrorK: { centre: number; surface: number; mean: number } | null;
-  crossCheck: { method: MethodId; maxDifferenceK: number; allowedK: number } | null;
+  crossCheck: { method: MethodId; refined: boolean; maxDifferenceK: number; allowedK: number } | null;
   energyRelativeError: number | null;
   timeSteps: number | null;
   endKind: 'duration' | 'point-temperature';

@@ -70,7 +70,7 @@ export function stageMethodFacts(stage: StageResult, points: PlanResult['points'
       id: 'cross-check',
       term: 'Cross-check',
       value: stage.crossCheck
-        ? `${methodName(stage.crossCheck.method)}: largest difference ${difference(stage.crossCheck.maxDifferenceK)}, ${stage.crossCheck.maxDifferenceK <= stage.crossCheck.toleranceK ? 'within' : 'OUTSIDE'} the tolerance of ${difference(stage.crossCheck.toleranceK)}`
+        ? `${methodName(stage.crossCheck.method)}${stage.crossCheck.refined ? ' (re-run at a tenth of the tolerance)' : ''}: largest difference ${difference(stage.crossCheck.maxDifferenceK)}, ${stage.crossCheck.maxDifferenceK <= stage.crossCheck.toleranceK ? 'within' : 'OUTSIDE'} the tolerance of ${difference(stage.crossCheck.toleranceK)}`
         : crossChecked
           ? 'none for this stage'
           : 'skipped in the quick pass; the full run checks it',

@@ -9,7 +9,7 @@ const quiet: StageFacts = {
   radiationIncluded: false, radiationCoefficientWPerM2K: 1, emissivityUsed: 0.8, surfaceStartK: 400, mediumK: 300,
   liquidBath: false, surfaceRangeK: { lowK: 320, highK: 400 }, constantProperties: true, propertyTemperatureK: 350,
   propertyVariation: { conductivity: 0.05, heatCapacity: 0.05 }, lumpedErrorK: null, lumpedAccuracyLimitK: 5,
-  oneTermErrorK: null, crossCheck: { method: 'finite-volume', maxDifferenceK: 0.005, allowedK: 0.02 },
+  oneTermErrorK: null, crossCheck: { method: 'finite-volume', refined: false, maxDifferenceK: 0.005, allowedK: 0.02 },
   energyRelativeError: 1e-10, timeSteps: null, endKind: 'duration',
 };
 const ids = (f: Partial<StageFacts>) => stageWarnings({ ...quiet, ...f }).map((w) => w.ruleId);
@@ -42,7 +42,7 @@ describe('validity rules', () => {
 
   it('flag an end condition met within the first step, and a cross-check beyond its allowance', () => {
     expect(ids({ endKind: 'point-temperature', durationS: 0 })).toContain('end-within-one-step');
-    expect(ids({ crossCheck: { method: 'finite-volume', maxDifferenceK: 0.5, allowedK: 0.02 } })).toContain('cross-check-difference');
+    expect(ids({ crossCheck: { method: 'finite-volume', refined: false, maxDifferenceK: 0.5, allowedK: 0.02 } })).toContain('cross-check-difference');
   });
 
   it('flag the one-term hand method below Fo = 0.2 (common practice)', () => {
