@@ -16,7 +16,7 @@ import { findRootBracketed } from '@/engine/numerics/findRootBracketed';
 import { dormandPrinceStep } from '@/engine/numerics/dormandPrinceStep';
 import { integrateDormandPrince } from '@/engine/numerics/integrateDormandPrince';
 import { integrateAdaptiveSimpson } from '@/engine/numerics/integrateAdaptiveSimpson';
-import { fieldVolumeMeanK } from './fieldVolumeMeanK';
+import { fieldMeanK } from '@/engine/fieldAtPoints';
 import { lumpedTimeConstantS } from './lumpedTimeConstantS';
 
 const RELATIVE_TOLERANCE = 1e-10;
@@ -50,7 +50,7 @@ function reachability(startK: number, targetK: number, equilibriumK: number, tol
 export const solveLumpedStage: StageSolver = (problem) => {
   const { geometry, material, boundary, end } = problem;
   if (problem.signal?.aborted) return { ok: false, code: 'aborted', message: 'Stopped.' };
-  const startK = fieldVolumeMeanK(problem.start, geometry);
+  const startK = fieldMeanK(problem.start, geometry);
   const V = geometry.volumeM3;
   const As = geometry.cooledAreaM2;
   const mediumK = boundary.mediumK;
