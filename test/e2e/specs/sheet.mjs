@@ -74,6 +74,13 @@ async function printAndCheck(page, paper, expected) {
 }
 
 export async function run({ page, baseUrl, shot }) {
+  for (const tool of ['pdftotext', 'pdfinfo', 'pdfimages', 'pdftoppm']) {
+    try {
+      execFileSync(tool, ['-v'], { stdio: 'ignore' });
+    } catch {
+      throw new Error(`the sheet spec reads the PDF with poppler's ${tool}; install poppler-utils (Debian: apt-get install poppler-utils)`);
+    }
+  }
   await page.goto(baseUrl);
   await page.getByTestId('open-file-input').setInputFiles({ name: 'sheet-test.coolstage.json', mimeType: 'application/json', buffer: Buffer.from(documentFile()) });
   await page.getByTestId('exchange-notice').getByText('Opened').waitFor();
