@@ -143,6 +143,14 @@ function runStage(stage: Stage, index: number, start: Field, startTimeS: number,
   // Only the series holds properties constant; lumped integrates rho*cp(T) along its ODE.
   const usesConstantProperties = (m: MethodId) => m === 'series';
   let primary = ctx.solvers[selection.method](problem({}));
+  // A method that finds itself out of its range after all (e.g. the series below its Fourier floor)
+  // hands an automatic stage to the finite-volume solver, which is valid everywhere.
+  if (!primary.ok && primary.code === 'not-applicable' && !selection.forced && selection.method !== 'finite-volume') {
+    selection.reason = `finite-volume: ${selection.method} declined the stage (${primary.message})`;
+    selection.method = 'finite-volume';
+    selection.crossCheck = { method: 'finite-volume', refined: true };
+    primary = ctx.solvers['finite-volume'](problem({}));
+  }
   if (!primary.ok) return { ok: false, aborted: primary.code === 'aborted', code: primary.code, message: primary.message };
   const endMeanK = fieldAtPoints(primary.solution.endField, geometry, depthM).mean!;
   propertyTemperatureK = (startMeanK + endMeanK) / 2;

@@ -135,3 +135,13 @@ describe('the demo plan', () => {
     expect(Math.abs(r.stages[2].endK.mean! - C(60))).toBeLessThan(0.01);
   });
 });
+
+describe('runPlan fallback', () => {
+  it('hands a stage the series declines (below its Fourier floor) to the finite-volume solver and says so', () => {
+    // 1 µs at Bi = 1 on a 10 mm half-thickness: Fo = alpha t / L² ≈ 1.1e-7, below the series' 5000-term floor.
+    const r = runPlan(plate([bath(4000, { kind: 'duration', seconds: 1e-6 })]));
+    expect(r.failure).toBeNull();
+    expect(r.stages[0].method).toBe('finite-volume');
+    expect(r.stages[0].methodReason).toMatch(/series declined/);
+  });
+});
