@@ -11,12 +11,14 @@ export interface ScreenEntry {
 }
 
 const VariantsScreen = lazy(() => import('@/features/variants/VariantsScreen').then((m) => ({ default: m.VariantsScreen })));
+const LibraryScreen = lazy(() => import('./LibraryScreen').then((m) => ({ default: m.LibraryScreen })));
 const SheetPage = lazy(() => import('@/features/sheet/SheetPage').then((m) => ({ default: m.SheetPage })));
 
 export const SCREENS: readonly ScreenEntry[] = [
   { hash: '#/', title: 'Workbench', Component: WorkbenchScreen },
   { hash: '#/variants', title: 'Variants', Component: VariantsScreen },
   { hash: '#/sheet', title: 'Stage sheet', Component: SheetPage },
+  { hash: '#/library', title: 'My library', Component: LibraryScreen },
 ];
 
 export function screenOfHash(hash: string): ScreenEntry {

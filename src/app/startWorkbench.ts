@@ -2,6 +2,7 @@
 // engine worker. Returns what the shell needs and a notice if the saved state could not be used.
 import { createAppStore, type AppStore } from '@/state/createAppStore';
 import { readSavedWorkbench } from '@/state/savedWorkbench';
+import { readUserLibrary } from '@/state/savedUserLibrary';
 import { startAutosave, type Autosave } from '@/state/startAutosave';
 import { connectEngine } from '@/state/connectEngine';
 import type { EngineClient, WorkerLike } from '@/worker/createEngineClient';
@@ -20,7 +21,8 @@ export interface Workbench {
 
 export function startWorkbench(storage: Pick<Storage, 'getItem' | 'setItem'>, createWorker: () => WorkerLike): Workbench {
   const loaded = readSavedWorkbench(storage);
-  const store = createAppStore({ document: loaded.document ?? demoDocument(), unitSystem: loaded.unitSystem });
+  const library = readUserLibrary(storage);
+  const store = createAppStore({ document: loaded.document ?? demoDocument(), unitSystem: loaded.unitSystem, userLibrary: library.library });
   const autosave = startAutosave(store, storage);
   const { client, recompute, disconnect } = connectEngine(store, createWorker);
   return {
@@ -28,7 +30,7 @@ export function startWorkbench(storage: Pick<Storage, 'getItem' | 'setItem'>, cr
     autosave,
     engine: client,
     recompute,
-    startNotice: loaded.notice,
+    startNotice: [loaded.notice, library.notice].filter(Boolean).join(' ') || null,
     stop() {
       autosave.stop();
       disconnect();

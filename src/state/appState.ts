@@ -5,5 +5,6 @@ import type { PlanEditSlice } from './planEditSlice';
 import type { ResultsSlice } from './resultsSlice';
 import type { ViewSlice } from './viewSlice';
 import type { VariantsSlice } from './variantsSlice';
+import type { UserLibrarySlice } from './userLibrarySlice';
 
-export type AppState = DocumentSlice & PlanEditSlice & ResultsSlice & ViewSlice & VariantsSlice;
+export type AppState = DocumentSlice & PlanEditSlice & ResultsSlice & ViewSlice & VariantsSlice & UserLibrarySlice;

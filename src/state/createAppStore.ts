@@ -8,15 +8,17 @@ import { createResultsSlice } from './resultsSlice';
 import type { UnitSystem } from '@/features/units/unitSystem';
 import { createViewSlice } from './viewSlice';
 import { createVariantsSlice } from './variantsSlice';
+import { createUserLibrarySlice, type UserLibrary } from './userLibrarySlice';
 
 export type AppStore = StoreApi<AppState>;
 
-export function createAppStore(initial: { document: PlanDocument; unitSystem?: UnitSystem; nowMs?: () => number }): AppStore {
+export function createAppStore(initial: { document: PlanDocument; unitSystem?: UnitSystem; userLibrary?: UserLibrary; nowMs?: () => number }): AppStore {
   return createStore<AppState>()((...a) => ({
     ...createDocumentSlice(initial.document, initial.nowMs)(...a),
     ...createPlanEditSlice(...a),
     ...createResultsSlice(...a),
     ...createViewSlice(initial.unitSystem ?? 'si')(...a),
     ...createVariantsSlice(...a),
+    ...createUserLibrarySlice(initial.userLibrary ?? { materials: [], media: [] })(...a),
   }));
 }

@@ -1,7 +1,8 @@
-// Writes the document and unit system to storage shortly after each change, and at once when
+// Writes the document, unit system and the user's library entries to storage shortly after each change, and at once when
 // the page is hidden or unloaded, so that a reload loses nothing.
 import type { AppStore } from './createAppStore';
 import { writeSavedWorkbench } from './savedWorkbench';
+import { writeUserLibrary } from './savedUserLibrary';
 
 /** Quiet time after the last edit before writing. */
 export const AUTOSAVE_DELAY_MS = 300;
@@ -18,16 +19,17 @@ export function startAutosave(store: AppStore, storage: Pick<Storage, 'setItem'>
   let error: string | null = null;
   const write = () => {
     timer = null;
-    const { document, unitSystem } = store.getState();
+    const { document, unitSystem, userLibrary } = store.getState();
     try {
       writeSavedWorkbench(storage, { document, unitSystem });
+      writeUserLibrary(storage, userLibrary);
       error = null;
     } catch (e) {
       error = `Autosave failed: ${(e as Error).message}`;
     }
   };
   const unsubscribe = store.subscribe((s, prev) => {
-    if (s.document === prev.document && s.unitSystem === prev.unitSystem) return;
+    if (s.document === prev.document && s.unitSystem === prev.unitSystem && s.userLibrary === prev.userLibrary) return;
     if (timer !== null) clearTimeout(timer);
     timer = setTimeout(write, delayMs);
   });
