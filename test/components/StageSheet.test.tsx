@@ -100,3 +100,12 @@ describe('StageSheet media sources', () => {
     expect(items).toEqual([`Stage 1 (still air), h: library “${air.name}”: ${air.hWPerM2K.source}`, 'Stage 2 (still air), h: as entered in the plan (user data)']);
   });
 });
+
+describe('sheetMediaSources', () => {
+  it('stages with the same medium and source share one line, with runs of stage numbers', async () => {
+    const { sheetMediaSources } = await import('@/features/sheet/sheetMediaSources');
+    const plan = structuredClone(demoDocument.main);
+    plan.stages = [0, 1, 2, 3, 4].map((i) => ({ ...plan.stages[0], medium: { ...plan.stages[0].medium, name: i === 3 ? 'oil' : 'air' } }));
+    expect(sheetMediaSources(plan)).toEqual(['Stages 1–3, 5 (air), h: as entered in the plan (user data)', 'Stage 4 (oil), h: as entered in the plan (user data)']);
+  });
+});

@@ -15,7 +15,7 @@ const ROOT = join(HERE, '..', '..', '..');
 /** Words may come within this many points of the paper's edge; the sheet's own margin is 34 pt or more. */
 const EDGE_ALLOWANCE_PT = 20;
 
-const squash = (s) => s.replace(/\s+/g, '');
+export const squash = (s) => s.replace(/\s+/g, '');
 
 /** The demo plan with one variant whose last stage is an agitated water bath, as a version-2 file. */
 function documentFile() {
@@ -30,7 +30,7 @@ function documentFile() {
   return JSON.stringify({ format, version: 2, temperatureUnit, main, variants: [{ id: 'v1', name: 'Bath for the last stage', plan: bath }], sheet: { revision: 'C', preparedBy: 'E2E Tester', checkedBy: '', date: '2026-12-01' } });
 }
 
-function pdfPages(pdfPath) {
+export function pdfPages(pdfPath) {
   const info = execFileSync('pdfinfo', [pdfPath], { encoding: 'utf8' });
   const pages = Number(info.match(/Pages:\s+(\d+)/)[1]);
   const [, w, h] = info.match(/Page size:\s+([\d.]+) x ([\d.]+) pts/);
