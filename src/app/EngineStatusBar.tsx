@@ -1,5 +1,6 @@
 // How the computation stands: up to date, computing (with progress and Stop), quick results shown
 // while the cross-check runs, stopped, or failed. Told in words, not by colour alone.
+import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { useAppStore } from '@/state/useAppStore';
 
 export function EngineStatusBar({ onStop, onRecompute }: { onStop: () => void; onRecompute: () => void }) {
@@ -9,6 +10,7 @@ export function EngineStatusBar({ onStop, onRecompute }: { onStop: () => void; o
   const lastRunMs = useAppStore((s) => s.lastRunMs);
   const stale = useAppStore((s) => s.shownRunId !== s.requestedRunId);
   const complete = useAppStore((s) => s.resultsComplete);
+  const failure = useAppStore((s) => s.results[MAIN_PLAN_ID]?.failure ?? null);
   const ms = lastRunMs === null ? '' : ` (computed in ${Math.round(lastRunMs)} ms)`;
   return (
     <div className={`engine-status is-${status}`} role="status" aria-live="polite">
@@ -23,6 +25,11 @@ export function EngineStatusBar({ onStop, onRecompute }: { onStop: () => void; o
         </>
       )}
       {status === 'idle' && !stale && complete && <span>✔ Results up to date and cross-checked{ms}</span>}
+      {!stale && failure && (
+        <strong className="status-failure">
+          ✖ Stage {failure.index + 1} ({failure.name}) could not be computed; later stages were not run. The reason is in its stage report.
+        </strong>
+      )}
       {status === 'idle' && (stale || !complete) && <span>Waiting for results…</span>}
       {status === 'stopped' && (
         <>

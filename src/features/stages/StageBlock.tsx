@@ -30,7 +30,9 @@ export function StageBlock({ index, stage, result, failed, notRun, system }: Sta
       <div>h {medium.heatTransfer.kind === 'constant' ? formatQuantity('heatTransferCoefficient', medium.heatTransfer.hWPerM2K, system) : 'by boiling curve'}{medium.radiation ? ' + radiation' : ''}</div>
       <div>ends {describeEndCondition(stage.end, system)}</div>
       {failed ? (
-        <div className="stage-failed">✖ not computed: {failed.message}</div>
+        <div className="stage-failed" title={failed.message}>
+          ✖ not computed (reason in the stage report)
+        </div>
       ) : notRun ? (
         <div className="stage-muted">not run (an earlier stage failed)</div>
       ) : result ? (

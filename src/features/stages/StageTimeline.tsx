@@ -1,5 +1,5 @@
 // The stage chain as a row of blocks whose widths follow the computed durations (equal widths
-// until results arrive). A listbox: arrows select, Alt+arrows move the selected stage, Home/End
+// until results arrive, or when a stage could not be computed). A listbox: arrows select, Alt+arrows move the selected stage, Home/End
 // jump; blocks can also be dragged. The buttons act on the selected stage.
 import { useEffect, useRef, useState, type KeyboardEvent } from 'react';
 import type { Stage } from '@/schema/planSchema';
@@ -52,7 +52,9 @@ export function StageTimeline(props: StageTimelineProps) {
   };
 
   const total = results?.reduce((s, r) => s + r.durationS, 0) ?? 0;
-  const grow = (i: number) => (results && total > 0 ? (results[i]?.durationS ?? 0) / total : 1 / stages.length);
+  // Durations are known for every stage only when the whole chain was computed; otherwise equal widths.
+  const sized = results !== null && failure === null && results.length === stages.length && total > 0;
+  const grow = (i: number) => (sized ? results[i].durationS / total : 1 / stages.length);
 
   return (
     <section className="panel timeline" aria-labelledby="timeline-heading">

@@ -33,7 +33,7 @@ function savedMaterial() {
 describe('library entries from the plan', () => {
   it('a material keeps the demo tables, back in degC exactly as the demo file has them', () => {
     const entry = savedMaterial();
-    const table = (demoPlan as { part: { material: { conductivityWPerMK: { table: [number, number][] } } } }).part.material.conductivityWPerMK.table;
+    const table = demoPlan.part.material.conductivityWPerMK.table;
     expect(entry.conductivityWPerMK).toEqual(table);
     expect(entry.emissivity.suggested).toBe(0.8);
   });
