@@ -1,9 +1,10 @@
 // Vertex-centred control volumes along one axis of a finite shape's symmetric part: a node at the centre
 // (symmetry plane or axis) and one on the surface, faces midway, built by the 1-D solver's grid code
-// (finite-volume/buildVolumeGrid: Patankar 1980, Sec. 4.6-1, and Vinokur's stretching towards the surface).
-// The 1-D code drops the 2 pi of the cylinder; wholePartFactor restores the whole part from the solved part.
+// (finite-volume/gridOnNodes: Patankar 1980, Sec. 4.6-1). The 1-D code drops the 2 pi of the cylinder;
+// wholePartFactor restores the whole part from the solved part. Node positions are this file's own: the 2-D/3-D
+// error constants in test/unit/finite-volume-2d were measured on them, whatever the 1-D grid sizing does.
 import type { FiniteAxis } from '../../geometry/geometry';
-import { buildVolumeGrid, gridOnNodes } from '../finite-volume/buildVolumeGrid';
+import { gridOnNodes } from '../finite-volume/buildVolumeGrid';
 
 export interface AxisControlVolumes {
   coordinate: FiniteAxis['coordinate'];
@@ -32,7 +33,15 @@ export function controlVolumes(coordinate: FiniteAxis['coordinate'], nodesM: Flo
   };
 }
 
-/** nodeCount nodes from 0 to the half-length, clustered towards the surface by the stretching parameter. */
-export function axisNodes(axis: FiniteAxis, nodeCount: number, stretch: number): Float64Array {
-  return buildVolumeGrid(axisGeometry(axis.coordinate), axis.halfLengthM, nodeCount - 1, stretch, [], 1).nodesM;
+/**
+ * nodeCount nodes from 0 to the half-length, x/L = 1 - sinh(beta (1 - xi)) / sinh(beta), xi = i / (nodeCount - 1):
+ * spacing beta coth(beta) times the even one at the centre and beta / sinh(beta) at the surface (Vinokur, On
+ * one-dimensional stretching functions for finite-difference calculations, J. Comput. Phys. 50 (1983) 215 (from memory)).
+ */
+export function axisNodes(axis: FiniteAxis, nodeCount: number, beta: number): Float64Array {
+  const cells = nodeCount - 1;
+  const nodes = new Float64Array(nodeCount);
+  for (let i = 0; i <= cells; i++) nodes[i] = beta > 0 ? axis.halfLengthM * (1 - Math.sinh(beta * (1 - i / cells)) / Math.sinh(beta)) : (axis.halfLengthM * i) / cells;
+  nodes[cells] = axis.halfLengthM;
+  return nodes;
 }

@@ -8,7 +8,7 @@
 // duration end every sample time is a step boundary. Point-temperature ends are located inside the step
 // by Brent's method on the step length (numerics/findRootBracketed) to LOCATE_STEP_TOLERANCE of the step.
 // Grid: DEFAULT_NODES_2D / DEFAULT_NODES_3D nodes per axis, clustered towards the faces by DEFAULT_STRETCH
-// (Vinokur stretching, as in the 1-D solver; spacing at the face about half the even spacing).
+// (Vinokur's sinh stretching; spacing at the face about half the even spacing).
 // Expected error: second order in space and time (test/unit/finite-volume-2d). Against the exact product solution
 // on the default grids (40 x 40 cells in 2-D, 20³ in 3-D), 25-40 mm parts from 850 °C: about 0.05 K (2-D) and
 // 0.25 K (3-D corner) in oil, 0.2 K in the first second of a water quench, less in air; through transition boiling
@@ -29,7 +29,7 @@ import { equilibriumTemperature } from '../finite-volume/equilibriumTemperature'
 
 const DEFAULT_NODES_2D = 41;
 const DEFAULT_NODES_3D = 21;
-/** Vinokur stretching parameter beta of buildVolumeGrid: face spacing beta/sinh(beta) = 0.55 of even. */
+/** Stretching beta of axisNodes: spacing 2.07 of even at the centre, 0.55 at the faces. */
 const DEFAULT_STRETCH = 2;
 const STEP_TARGET_CHANGE_K = 10;
 const STEP_GROWTH_MAX = 1.5;
