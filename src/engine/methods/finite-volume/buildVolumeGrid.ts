@@ -28,10 +28,9 @@ export function areaExponentOf(geometry: SeriesGeometry): number {
 }
 
 /**
- * Node positions x/L = tanh(delta xi) / tanh(delta), xi = i/N: a smooth (analytic) stretching, so the scheme stays
- * second order. The spacing goes as sech²(delta xi): flat near the centre, shrinking towards the surface, where it is
- * 1/cosh²(delta) of the centre spacing. Vinokur, On one-dimensional stretching functions for finite-difference
- * calculations, J. Comput. Phys. 50 (1983) (from memory).
+ * Node positions x/L = 1 - sinh(beta (1 - xi)) / sinh(beta), xi = i/N: a smooth stretching that clusters nodes
+ * at the surface (spacing ratio beta / sinh(beta) there), which keeps the scheme second order.
+ * Vinokur, On one-dimensional stretching functions for finite-difference calculations, J. Comput. Phys. 50 (1983) (from memory).
  * `pinnedM` are positions that get a node of their own (the nearest interior node moves there).
  */
 export function buildVolumeGrid(geometry: SeriesGeometry, lengthM: number, cellCount: number, stretch: number, pinnedM: readonly number[], basisVolume: number): VolumeGrid {
@@ -39,7 +38,7 @@ export function buildVolumeGrid(geometry: SeriesGeometry, lengthM: number, cellC
   const nodesM = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const xi = i / cellCount;
-    nodesM[i] = stretch > 1e-9 ? (lengthM * Math.tanh(stretch * xi)) / Math.tanh(stretch) : lengthM * xi;
+    nodesM[i] = stretch > 1e-9 ? lengthM * (1 - Math.sinh(stretch * (1 - xi)) / Math.sinh(stretch)) : lengthM * xi;
   }
   nodesM[0] = 0;
   nodesM[cellCount] = lengthM;
