@@ -15,7 +15,8 @@ import type { SurfaceBoundary } from '../../properties/surfaceBoundary';
 import { evaluateMaterial, type MaterialTable } from '../finite-volume/tabulateMaterial';
 import type { FiniteGrid } from './finiteGrid';
 
-const PICARD_MAX_ITERATIONS = 25;
+/** An iteration that has not settled by then is cycling (at a kink of an h table): the caller halves the step. */
+const PICARD_MAX_ITERATIONS = 8;
 /** Below this change the chord capacity is the mean of C at both ends (the enthalpy difference would lose digits). */
 const CHORD_MIN_CHANGE_K = 1e-4;
 
