@@ -48,8 +48,6 @@ const TABLE_MARGIN_K = 5;
 export interface FiniteVolume2DOptions {
   /** Nodes per axis, centre and surface included (cells = nodes - 1). */
   nodesPerAxis?: number;
-  /** Clustering of nodes towards the faces (0 = even spacing). */
-  stretch?: number;
 }
 
 export function finiteVolume2DSolver(options: FiniteVolume2DOptions = {}): StageSolver {
@@ -64,7 +62,7 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   const axes = geometry.finiteAxes;
   if (!axes) return { ok: false, code: 'not-applicable', message: 'This solver is for short cylinders, bars and blocks; 1-D shapes use the 1-D finite-volume solver.' };
   const nodes = options.nodesPerAxis ?? (axes.length === 2 ? DEFAULT_NODES_2D : DEFAULT_NODES_3D);
-  const grid = finiteGrid(axes, axes.map(() => nodes), options.stretch ?? DEFAULT_STRETCH);
+  const grid = finiteGrid(axes, axes.map(() => nodes), DEFAULT_STRETCH);
   const u = startOnGrid(problem.start, grid);
   if (!u) return { ok: false, code: 'not-applicable', message: `The stage starts from a ${problem.start.kind} field of a 1-D shape; a ${geometry.shape.kind} needs a uniform, product or grid field.` };
 
