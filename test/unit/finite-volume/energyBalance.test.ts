@@ -23,6 +23,7 @@ const cases: [Shape1D, string, Medium, number][] = [
   ['slab', 'radiating air', radiatingAir, 200],
   ['cylinder', 'boiling-curve bath', boilingBath, 60],
   ['sphere', 'boiling-curve bath', boilingBath, 60],
+  ['slab', 'boiling-curve bath with radiation', { ...boilingBath, radiation: { emissivity: 0.6, surroundingsTemperature: 350 } }, 45],
   ['cylinder', 'radiating air', radiatingAir, 300],
   // A long hold: steps of tens of seconds, where the conduction terms dominate the Newton matrix.
   ['slab', 'radiating air (long hold)', radiatingAir, 4000],
