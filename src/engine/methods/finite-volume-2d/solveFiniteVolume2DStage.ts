@@ -126,7 +126,8 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   const history: number[][] = probes.map((p) => [valueOf(u, p.positionM)]);
   const startEnergy = storedEnergy(u);
   const next = new Float64Array(grid.size);
-  const minSpacing = Math.min(...grid.axes.map((a) => a.nodesM[1] - a.nodesM[0]));
+  // The smallest spacing is at the faces (the grid is clustered there).
+  const minSpacing = Math.min(...grid.axes.map((a) => a.nodesM[a.nodesM.length - 1] - a.nodesM[a.nodesM.length - 2]));
   const alpha = material.conductivity.at(u[0]) / material.volumetricHeatCapacity(u[0]);
   let dtS = Math.min(FIRST_STEP_FOURIER * (minSpacing * minSpacing) / alpha, durationS / (sampleCount - 1));
   let timeS = 0;
