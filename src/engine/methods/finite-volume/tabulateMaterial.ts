@@ -4,7 +4,8 @@
 // Newton iteration on e converges quadratically). The enthalpy form conserves energy through any cp peak:
 // Voller and Swaminathan, General source-based method for solidification phase change, Numer. Heat Transfer B 19 (1991) (from memory).
 // Validity: between lowK and highK; beyond them k and C are held at their end values (e extended linearly).
-// Error against the plan's tables: at most (step/2) x the jump in slope at a table row not on the grid (step <= STEP_TARGET_K).
+// Error against the plan's tables: at most (step/4) x the jump in slope, in the grid interval holding a table row
+// (the chord of a kinked line; step <= STEP_TARGET_K).
 import type { MaterialModel } from '../../properties/materialModel';
 
 /** Spacing of the resampling grid, K: fine against any cp peak a plan can hold. */
