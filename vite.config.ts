@@ -10,7 +10,9 @@ export default defineConfig({
       'plotly-impl': 'plotly.js-basic-dist-min',
     },
   },
-  worker: { format: 'es' },
+  // The minifier's compress pass makes the engine about 10x slower in the worker (measured: the demo's quick
+  // pass 2.4 s minified vs 0.17 s without compress, same bundle otherwise); names are still mangled.
+  worker: { format: 'es', rolldownOptions: { output: { minify: { compress: false, mangle: true } } } },
   build: { target: 'es2022', chunkSizeWarningLimit: 1600 },
   test: {
     environment: 'node',
