@@ -48,6 +48,16 @@ describe('finite-volume 2-D/3-D against the exact product solution', () => {
     });
   }
 
+  it('short cylinder: a four times tighter tolerance doubles the cells and cuts the error about four times', { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
+    const at = (toleranceK: number) => finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'duration', seconds: 60 }, sampleCount: 13, toleranceK });
+    const exact = solved(solveProductStage(at(1e-4)));
+    const standard = solved(solveFiniteVolume2DStage(at(0.01)));
+    const tight = solved(solveFiniteVolume2DStage(at(0.0025)));
+    expect(tight.effort.cells, 'nodes at 0.0025 K').toBe(81 * 81);
+    const ratio = largestDifference(standard, exact).differenceK / largestDifference(tight, exact).differenceK;
+    expect(ratio, `error at 0.01 K over error at 0.0025 K: ${ratio}, expected above ${SECOND_ORDER_RATIO}`).toBeGreaterThan(SECOND_ORDER_RATIO);
+  });
+
   it('short cylinder: the error falls with the square of the cell size', { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
     const problem = finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'duration', seconds: 60 }, sampleCount: 13 });
     const exact = solved(solveProductStage(problem));

@@ -4,11 +4,11 @@
 // capacity and Picard re-linearisation (douglasAdiStep): k(T), rho(T) cp(T), h(Ts) tables and radiation.
 // Validity: any start field on the shape (uniform, product, tensor grid), any medium; all faces see the
 // same medium. Time step: grows by at most STEP_GROWTH_MAX while the largest node change per step stays
-// near STEP_TARGET_CHANGE_K, halved when it exceeds twice that or the Picard iteration fails; for a
+// near STEP_TARGET_CHANGE_K (over the refinement), halved when it exceeds twice that or the Picard iteration fails; for a
 // duration end every sample time is a step boundary. Point-temperature ends are located inside the step
 // by Brent's method on the step length (numerics/findRootBracketed) to LOCATE_STEP_TOLERANCE of the step.
 // Grid: DEFAULT_NODES_2D / DEFAULT_NODES_3D nodes per axis at toleranceK >= 0.01 K, refined as 1/sqrt(toleranceK)
-// below that up to 2x (2-D) or 1.5x (3-D) the cells, clustered towards the faces by DEFAULT_STRETCH (Vinokur's sinh
+// below that up to 2x (2-D) or 1.5x (3-D) the cells (and as many more steps), clustered towards the faces by DEFAULT_STRETCH (Vinokur's sinh
 // stretching; spacing at the face about half the even spacing). A re-run at a tenth of the tolerance is thus a grid
 // refinement check.
 // Expected error: second order in space and time (test/unit/finite-volume-2d). Against the exact product solution
@@ -56,10 +56,9 @@ export interface FiniteVolume2DOptions {
   nodesPerAxis?: number;
 }
 
-function nodesFor(dims: number, toleranceK: number): number {
-  const cells = (dims === 2 ? DEFAULT_NODES_2D : DEFAULT_NODES_3D) - 1;
-  const refinement = Math.min(dims === 2 ? MAX_REFINEMENT_2D : MAX_REFINEMENT_3D, Math.max(1, Math.sqrt(DEFAULT_GRID_TOLERANCE_K / toleranceK)));
-  return 1 + Math.round(cells * refinement);
+/** How much finer than the defaults the cells and the steps are at this tolerance (1 at 0.01 K and above). */
+function refinementFor(dims: number, toleranceK: number): number {
+  return Math.min(dims === 2 ? MAX_REFINEMENT_2D : MAX_REFINEMENT_3D, Math.max(1, Math.sqrt(DEFAULT_GRID_TOLERANCE_K / toleranceK)));
 }
 
 export function finiteVolume2DSolver(options: FiniteVolume2DOptions = {}): StageSolver {
@@ -73,7 +72,10 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   const { geometry, material, boundary, end } = problem;
   const axes = geometry.finiteAxes;
   if (!axes) return { ok: false, code: 'not-applicable', message: 'This solver is for short cylinders, bars and blocks; 1-D shapes use the 1-D finite-volume solver.' };
-  const nodes = options.nodesPerAxis ?? nodesFor(axes.length, problem.toleranceK);
+  const refinement = refinementFor(axes.length, problem.toleranceK);
+  const nodes = options.nodesPerAxis ?? 1 + Math.round(((axes.length === 2 ? DEFAULT_NODES_2D : DEFAULT_NODES_3D) - 1) * refinement);
+  // The step error is second order as well: the change per step shrinks with the cells.
+  const stepTargetK = STEP_TARGET_CHANGE_K / refinement;
   const grid = finiteGrid(axes, axes.map(() => nodes), DEFAULT_STRETCH);
   const u = startOnGrid(problem.start, grid);
   if (!u) return { ok: false, code: 'not-applicable', message: `The stage starts from a ${problem.start.kind} field of a 1-D shape; a ${geometry.shape.kind} needs a uniform, product or grid field.` };
@@ -157,7 +159,7 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
       tryS = Math.min(tryS, sampleS - timeS);
     }
     let result = stepper.step(u, tryS, next);
-    if ((!result.converged || result.maxChangeK > 2 * STEP_TARGET_CHANGE_K) && tryS > MIN_STEP_S) {
+    if ((!result.converged || result.maxChangeK > 2 * stepTargetK) && tryS > MIN_STEP_S) {
       dtS = tryS / 2;
       continue;
     }
@@ -189,7 +191,7 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
       timeS = (durationS * nextSample) / (sampleCount - 1);
       nextSample++;
     }
-    dtS = Math.min(STEP_GROWTH_MAX * dtS, tryS * (STEP_TARGET_CHANGE_K / Math.max(result.maxChangeK, 1e-12)));
+    dtS = Math.min(STEP_GROWTH_MAX * dtS, tryS * (stepTargetK / Math.max(result.maxChangeK, 1e-12)));
     if (end.kind === 'point-temperature' && !reached) {
       let farthest = 0;
       for (let p = 0; p < u.length; p++) farthest = Math.max(farthest, Math.abs(u[p] - equilibriumK));
