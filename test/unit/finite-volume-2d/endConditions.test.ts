@@ -72,13 +72,15 @@ describe('point-temperature ends', () => {
     if (!outcome.ok) expect(outcome.code).toBe('target-unreachable');
   });
 
-  it('finite volume: a cancelled stage stops with "aborted"', { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
-    const controller = new AbortController();
-    controller.abort();
-    const outcome = solveFiniteVolume2DStage(finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'duration', seconds: 100 }, signal: controller.signal }));
-    expect(outcome.ok).toBe(false);
-    if (!outcome.ok) expect(outcome.code).toBe('aborted');
-  });
+  for (const [method, solve] of solvers) {
+    it(`${method}: a cancelled stage stops with "aborted"`, { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
+      const controller = new AbortController();
+      controller.abort();
+      const outcome = solve(finiteProblem({ shape: shortCylinder, medium: OIL, end: { kind: 'duration', seconds: 100 }, signal: controller.signal }));
+      expect(outcome.ok).toBe(false);
+      if (!outcome.ok) expect(outcome.code).toBe('aborted');
+    });
+  }
 });
 
 describe('the depth point and field look-ups', () => {

@@ -42,6 +42,8 @@ interface Probe {
 
 export const solveProductStage: StageSolver = (problem): StageOutcome => {
   const { geometry, material, boundary, end } = problem;
+  // A product stage takes milliseconds: cancellation is honoured at its start.
+  if (problem.signal?.aborted) return { ok: false, code: 'aborted', message: 'The stage was cancelled.' };
   const axes = geometry.finiteAxes;
   if (!axes) return { ok: false, code: 'not-applicable', message: 'The product solution is for short cylinders, bars and blocks; 1-D shapes use the 1-D series.' };
   if (!boundary.hIsConstant || boundary.radiation) {
