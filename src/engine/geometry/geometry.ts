@@ -85,8 +85,8 @@ export function geometryOf(shape: Shape): Geometry {
       const finiteAxes: FiniteAxis[] = [{ coordinate: 'linear', name: 'x', halfLengthM: a }, { coordinate: 'linear', name: 'y', halfLengthM: b }];
       return { shape, volumeM3: 4 * a * b, cooledAreaM2: 4 * (a + b), characteristicLengthM: (a * b) / (a + b), seriesLengthM: Math.min(a, b), seriesLengthLabel: 'smaller half-side', basis: 'per m of length', oneD: null, finiteAxes, points: [
         { id: 'centre', label: 'axis', positionM: [0, 0] },
-        { id: 'face-x', label: 'face ⟂ x (width 2a), middle', positionM: [a, 0] },
-        { id: 'face-y', label: 'face ⟂ y (height 2b), middle', positionM: [0, b] },
+        { id: 'face-x', label: 'face ⟂ x (at x = a), middle', positionM: [a, 0] },
+        { id: 'face-y', label: 'face ⟂ y (at y = b), middle', positionM: [0, b] },
         { id: 'edge', label: 'long edge', positionM: [a, b] },
         { id: 'mean', label: 'volume mean' } ] };
     }
