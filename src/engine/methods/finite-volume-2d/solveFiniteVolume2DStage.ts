@@ -4,13 +4,13 @@
 // capacity and Picard re-linearisation (douglasAdiStep): k(T), rho(T) cp(T), h(Ts) tables and radiation.
 // Validity: any start field on the shape (uniform, product, tensor grid), any medium; all faces see the
 // same medium. Time step: grows by at most STEP_GROWTH_MAX while the largest node change per step stays
-// near STEP_TARGET_CHANGE_K (over the refinement), halved when it exceeds twice that or the Picard iteration fails; for a
-// duration end every sample time is a step boundary. Point-temperature ends are located inside the step
-// by Brent's method on the step length (numerics/findRootBracketed) to LOCATE_STEP_TOLERANCE of the step.
-// Grid: DEFAULT_NODES_2D / DEFAULT_NODES_3D nodes per axis at toleranceK >= 0.01 K, refined as 1/sqrt(toleranceK)
-// below that up to 2x (2-D) or 1.5x (3-D) the cells (and as many more steps), clustered towards the faces by DEFAULT_STRETCH (Vinokur's sinh
-// stretching; spacing at the face about half the even spacing). A re-run at a tenth of the tolerance is thus a grid
-// refinement check.
+// near STEP_TARGET_CHANGE_K (divided by the refinement), halved when it exceeds twice that or the Picard
+// iteration fails; for a duration end every sample time is a step boundary. Point-temperature ends are
+// located inside the step by Brent's method on the step length (numerics/findRootBracketed).
+// Grid: DEFAULT_NODES_2D / DEFAULT_NODES_3D nodes per axis at toleranceK >= 0.01 K; below that cells and
+// steps are refined together as 1/sqrt(toleranceK), up to 2x (2-D) or 1.5x (3-D), so a re-run at a tenth
+// of the tolerance is a grid-refinement check. Nodes are clustered towards the faces by DEFAULT_STRETCH
+// (Vinokur's sinh stretching; face spacing about half the even spacing).
 // Expected error: second order in space and time (test/unit/finite-volume-2d). Against the exact product solution
 // on the default grids (40 x 40 cells in 2-D, 20³ in 3-D), 25-40 mm parts from 850 °C: about 0.05 K (2-D) and
 // 0.25 K (3-D corner) in oil, 0.2 K in the first second of a water quench, less in air; through transition boiling
