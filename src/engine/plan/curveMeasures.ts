@@ -4,7 +4,7 @@ import type { StageSamples } from '../methods/stageProblem';
 import type { PointId } from '@/schema/planSchema';
 
 /** Points on the cooled surface, by shape family; 'surface' for 1-D shapes. */
-const SURFACE_POINTS: PointId[] = ['surface', 'face-x', 'face-y', 'face-z', 'edge', 'corner'];
+export const SURFACE_POINTS: PointId[] = ['surface', 'face-x', 'face-y', 'face-z', 'edge', 'corner'];
 
 export interface CurveMeasures {
   maxSurfaceCoolingRateKPerS: number;

@@ -14,7 +14,7 @@ import { solveProductStage } from '../methods/product/solveProductStage';
 import { solveFiniteVolume2DStage } from '../methods/finite-volume-2d/solveFiniteVolume2DStage';
 import { selectMethod } from './selectMethod';
 import { effectiveH, stageBiot } from './stageBiot';
-import { curveMeasures, maxSampleDifference } from './curveMeasures';
+import { curveMeasures, maxSampleDifference, SURFACE_POINTS } from './curveMeasures';
 import { fieldAtPoints, fieldProfile } from '../fieldAtPoints';
 import { lumpedErrorEstimateK } from './lumpedErrorEstimate';
 import { stageWarnings, LIQUID_H_THRESHOLD_WPERM2K } from '../validity/rules';
@@ -120,7 +120,8 @@ function runStage(stage: Stage, index: number, start: Field, startTimeS: number,
   const depthM = end.kind === 'point-temperature' && end.point === 'depth' ? end.depthM : undefined;
   const startK = fieldAtPoints(start, geometry, depthM);
   const startMeanK = startK.mean!;
-  const surfaceStartK = startK.surface ?? startK.corner ?? startMeanK;
+  // The hottest point on the cooled surface: the conservative one for h(Ts) and radiation.
+  const surfaceStartK = Math.max(...SURFACE_POINTS.map((id) => startK[id]).filter((t): t is number => t !== undefined));
 
   // Constant-property methods evaluate properties at the stage's mean temperature: first guessed
   // (the target, or the start), then corrected to the mean of the start and end means.
