@@ -1,5 +1,6 @@
 // What the engine found for the selected stage (method, Biot numbers, Fo, cross-check) and the
 // plan's checks (warnings with their rules and advice) and its method table, from the method and warnings features.
+import { useDeferredValue } from 'react';
 import { MethodPanel } from '@/features/method/MethodPanel';
 import { StageMethodTable } from '@/features/method/StageMethodTable';
 import { WarningList } from '@/features/warnings/WarningList';
@@ -7,7 +8,8 @@ import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { useAppStore } from '@/state/useAppStore';
 
 export function StageReportPanel() {
-  const result = useAppStore((s) => s.results[MAIN_PLAN_ID] ?? null);
+  // Rendered after the charts of a new result (lower priority): the curves move first.
+  const result = useDeferredValue(useAppStore((s) => s.results[MAIN_PLAN_ID] ?? null));
   const selected = useAppStore((s) => s.selectedStageIndex);
   const system = useAppStore((s) => s.unitSystem);
   const selectStage = useAppStore((s) => s.selectStage);

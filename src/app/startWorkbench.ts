@@ -5,7 +5,8 @@ import { readSavedWorkbench } from '@/state/savedWorkbench';
 import { readUserLibrary } from '@/state/savedUserLibrary';
 import { startAutosave, type Autosave } from '@/state/startAutosave';
 import { connectEngine } from '@/state/connectEngine';
-import type { EngineClient, WorkerLike } from '@/worker/createEngineClient';
+import type { EngineClient } from '@/worker/createEngineClient';
+import type { WorkerLike } from '@/worker/createWorkerLane';
 import { demoDocument } from './demoDocument';
 
 export interface Workbench {

@@ -1,7 +1,8 @@
 // Keeps results in step with the document: every document change asks the engine client for a
 // run (the client supersedes older ones) and its replies are written into the store.
 import type { PlanDocument } from '@/schema/planDocument';
-import { createEngineClient, type EngineClient, type WorkerLike } from '@/worker/createEngineClient';
+import { createEngineClient, type EngineClient } from '@/worker/createEngineClient';
+import type { WorkerLike } from '@/worker/createWorkerLane';
 import type { AppStore } from './createAppStore';
 
 export const MAIN_PLAN_ID = 'main';

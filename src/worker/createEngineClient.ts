@@ -1,28 +1,24 @@
-// The UI side of the engine worker. The latest request wins: at most one run is in the worker
-// and at most one waits behind it (newer requests replace the waiting one). Replies of a run that
-// a newer request superseded are dropped. Each run answers twice: a quick pass (shown at once) and
-// the full, cross-checked pass. A superseded run that is already in its full pass, one still going
-// after SUPERSEDE_GRACE_MS, and any run when the user presses Stop, is ended by terminating the
-// worker and starting a new one.
+// The UI side of the engine: two workers, so that the answer to an edit never waits for the check
+// of an older plan. The quick lane runs each plan without cross-checks and its result is shown at
+// once; the check lane then runs the same plan with every stage cross-checked and replaces it.
+// The latest request wins: a new edit ends the check lane's run at once (terminate; it restarts on
+// its next run) and queues behind the quick lane's run, which gets SUPERSEDE_GRACE_MS to finish
+// before that worker too is restarted. Replies of superseded runs are dropped. Stop ends both.
 import type { PlanK } from '@/schema/planSchema';
-import { engineResponseSchema, type EngineRequest, type PlanRunResult } from './engineMessages';
+import type { EngineRequest, EngineResponse, PlanRunResult } from './engineMessages';
+import { createWorkerLane, type WorkerLike } from './createWorkerLane';
 
-/** How long a superseded run may finish on its own before the worker is restarted. */
+/** How long a superseded quick run may finish on its own before its worker is restarted. */
 export const SUPERSEDE_GRACE_MS = 250;
-
-export interface WorkerLike {
-  postMessage(message: EngineRequest): void;
-  terminate(): void;
-  onmessage: ((event: MessageEvent) => void) | null;
-  onerror: ((event: ErrorEvent) => void) | null;
-}
+/** Share of the progress bar given to the quick pass (it takes about a quarter of the full one). */
+export const QUICK_PASS_SHARE = 0.25;
 
 export type EngineStatus = 'idle' | 'running' | 'stopped' | 'error';
 
 export interface ResultInfo {
   runId: number;
   elapsedMs: number;
-  /** False for the quick pass (no cross-checks); the full pass follows. */
+  /** False for the quick pass (no cross-checks); the cross-checked results follow. */
   complete: boolean;
 }
 
@@ -35,134 +31,109 @@ export interface EngineClientEvents {
 export interface EngineClient {
   /** Ask for a run; returns its id. Supersedes any earlier request. */
   run(plans: { id: string; plan: PlanK }[]): number;
-  /** End the current run now (the worker is restarted); its results are never shown. */
+  /** End the current run now (the workers are restarted); its results are never shown. */
   stop(): void;
   dispose(): void;
 }
 
+type RunRequest = Extract<EngineRequest, { kind: 'run' }>;
+
 export function createEngineClient(createWorker: () => WorkerLike, events: EngineClientEvents, graceMs = SUPERSEDE_GRACE_MS): EngineClient {
-  let worker: WorkerLike | null = null;
   let nextRunId = 1;
-  let inFlight: number | null = null;
-  /** True once the run in the worker has sent its quick pass and is doing the full one. */
-  let inFullPass = false;
-  let waiting: Extract<EngineRequest, { kind: 'run' }> | null = null;
+  /** The run whose results are wanted; anything else is stale. */
+  let latest: { runId: number; plans: RunRequest['plans'] } | null = null;
+  let quickWaiting: RunRequest | null = null;
   let graceTimer: ReturnType<typeof setTimeout> | null = null;
 
   const clearGrace = () => {
     if (graceTimer !== null) clearTimeout(graceTimer);
     graceTimer = null;
   };
-
-  function send(request: Extract<EngineRequest, { kind: 'run' }>) {
-    inFlight = request.runId;
-    inFullPass = false;
-    ensureWorker().postMessage(request);
-    events.onStatus('running');
-  }
-
-  function finishInFlight() {
-    inFlight = null;
+  const isLatest = (runId: number | null) => runId !== null && latest?.runId === runId;
+  const failed = (message: string) => {
+    quick.restart();
+    check.restart();
+    quickWaiting = null;
     clearGrace();
-    if (waiting) {
-      const next = waiting;
-      waiting = null;
-      send(next);
-    }
-  }
+    events.onStatus('error', message);
+  };
 
-  function restartWorker() {
-    worker?.terminate();
-    worker = null;
-    inFlight = null;
-  }
+  const sendWaitingQuick = () => {
+    clearGrace();
+    if (!quickWaiting) return;
+    const next = quickWaiting;
+    quickWaiting = null;
+    quick.post(next);
+  };
 
-  function onMessage(event: MessageEvent) {
-    const parsed = engineResponseSchema.safeParse(event.data);
-    if (!parsed.success) {
-      events.onStatus('error', 'The engine sent a reply the workbench does not understand.');
-      return;
-    }
-    const reply = parsed.data;
-    if (reply.runId !== inFlight) return; // from a run that was stopped or restarted away
-    const superseded = waiting !== null;
-    switch (reply.kind) {
-      case 'progress':
-        if (!superseded) events.onProgress(reply.fraction);
+  const quick = createWorkerLane(
+    createWorker,
+    (reply: EngineResponse) => {
+      if (reply.kind === 'progress') {
+        if (isLatest(reply.runId)) events.onProgress(reply.fraction * QUICK_PASS_SHARE);
         return;
-      case 'result':
-        if (!superseded) events.onResults(reply.results, { runId: reply.runId, elapsedMs: reply.elapsedMs, complete: reply.complete });
-        if (!reply.complete) {
-          inFullPass = true;
-          return;
-        }
-        break;
-      case 'error':
-        if (!superseded) events.onStatus('error', reply.message);
-        break;
-      case 'cancelled':
-        break;
-    }
-    const wasLast = !superseded;
-    finishInFlight();
-    if (wasLast && reply.kind !== 'error') events.onStatus('idle');
-  }
+      }
+      if (isLatest(reply.runId) && reply.kind === 'result' && latest) {
+        events.onResults(reply.results, { runId: reply.runId, elapsedMs: reply.elapsedMs, complete: false });
+        check.post({ kind: 'run', runId: reply.runId, crossCheck: true, plans: latest.plans });
+      } else if (isLatest(reply.runId) && reply.kind === 'error') {
+        events.onStatus('error', reply.message);
+      }
+      sendWaitingQuick();
+    },
+    failed,
+  );
 
-  function ensureWorker(): WorkerLike {
-    if (worker) return worker;
-    const w = createWorker();
-    w.onmessage = onMessage;
-    w.onerror = (event: ErrorEvent) => {
-      event.preventDefault?.();
-      restartWorker();
-      waiting = null;
-      clearGrace();
-      events.onStatus('error', `The engine worker failed: ${event.message || 'unknown error'}. Edit the plan to try again.`);
-    };
-    worker = w;
-    return w;
-  }
+  const check = createWorkerLane(
+    createWorker,
+    (reply: EngineResponse) => {
+      if (!isLatest(reply.runId)) return;
+      if (reply.kind === 'progress') events.onProgress(QUICK_PASS_SHARE + reply.fraction * (1 - QUICK_PASS_SHARE));
+      else if (reply.kind === 'result') {
+        events.onResults(reply.results, { runId: reply.runId, elapsedMs: reply.elapsedMs, complete: true });
+        events.onStatus('idle');
+      } else if (reply.kind === 'error') events.onStatus('error', reply.message);
+    },
+    failed,
+  );
 
   return {
     run(plans) {
-      const request = { kind: 'run' as const, runId: nextRunId++, plans };
-      if (inFlight === null) {
-        send(request);
-        return request.runId;
+      const runId = nextRunId++;
+      latest = { runId, plans };
+      // The check of an older plan is not worth waiting for.
+      if (check.busyWith() !== null) check.restart();
+      const request: RunRequest = { kind: 'run', runId, crossCheck: false, plans };
+      events.onStatus('running');
+      if (quick.busyWith() === null) {
+        quick.post(request);
+        return runId;
       }
-      waiting = request;
-      if (inFullPass) {
-        // The quick answer is out; the check of an outdated plan is not worth waiting for.
-        restartWorker();
-        clearGrace();
-        waiting = null;
-        send(request);
-        return request.runId;
-      }
-      worker?.postMessage({ kind: 'cancel', runId: inFlight });
-      if (graceTimer === null) {
-        graceTimer = setTimeout(() => {
-          graceTimer = null;
-          if (inFlight === null || !waiting) return;
-          restartWorker();
-          const next = waiting;
-          waiting = null;
-          send(next);
-        }, graceMs);
-      }
-      return request.runId;
+      quickWaiting = request;
+      quick.cancel();
+      graceTimer ??= setTimeout(() => {
+        graceTimer = null;
+        if (quick.busyWith() === null || !quickWaiting) return;
+        quick.restart();
+        sendWaitingQuick();
+      }, graceMs);
+      return runId;
     },
     stop() {
-      if (inFlight === null && !waiting) return;
+      const busy = quick.busyWith() !== null || check.busyWith() !== null || quickWaiting !== null;
       clearGrace();
-      waiting = null;
-      restartWorker();
-      events.onStatus('stopped');
+      quickWaiting = null;
+      latest = null;
+      quick.restart();
+      check.restart();
+      if (busy) events.onStatus('stopped');
     },
     dispose() {
       clearGrace();
-      waiting = null;
-      restartWorker();
+      quickWaiting = null;
+      latest = null;
+      quick.restart();
+      check.restart();
     },
   };
 }

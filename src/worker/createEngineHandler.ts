@@ -1,16 +1,13 @@
 // The worker's message handling, apart from the worker global so that tests can drive it in Node.
-// One run at a time, in two passes: a quick one without cross-checks (shown at once), then the full
-// one with every stage checked by a second method. Plans and passes are computed one after another,
-// yielding to the event loop between them so that a cancel message can get in. A run that is inside
-// runPlan cannot hear a cancel: the client terminates the worker for that case (see createEngineClient).
+// One run at a time, one pass per run: quick (no cross-checks) or full (every stage checked by a
+// second method), as the request says. Plans are computed one after another, yielding to the event
+// loop between them so that a cancel message can get in. A run that is inside runPlan cannot hear
+// a cancel: the client terminates the worker for that case (see createEngineClient).
 import type { PlanK } from '@/schema/planSchema';
 import type { PlanResult } from '@/engine/plan/planResult';
 import { engineRequestSchema, type EngineResponse, type PlanRunResult } from './engineMessages';
 
 export type RunPlanFn = (plan: PlanK, options?: { crossCheck?: boolean; signal?: AbortSignal; onProgress?: (fraction: number) => void }) => PlanResult;
-
-/** Share of the progress bar given to the quick pass (it takes about a quarter of the full one). */
-const QUICK_PASS_SHARE = 0.25;
 
 /** Progress messages are sent at most this often, so a fast run does not flood the UI thread. */
 export const PROGRESS_INTERVAL_MS = 50;
@@ -27,34 +24,26 @@ function issueText(issues: { path: PropertyKey[]; message: string }[]): string {
 export function createEngineHandler(runPlan: RunPlanFn, post: (response: EngineResponse) => void, now: () => number = () => performance.now()) {
   const controllers = new Map<number, AbortController>();
 
-  async function run(runId: number, plans: { id: string; plan: PlanK }[]) {
+  async function run(runId: number, crossCheck: boolean, plans: { id: string; plan: PlanK }[]) {
     const controller = new AbortController();
     controllers.set(runId, controller);
     const startMs = now();
     let lastProgressMs = -Infinity;
-    const pass = async (crossCheck: boolean, from: number, share: number): Promise<PlanRunResult[] | null> => {
-      const results: PlanRunResult[] = [];
+    const results: PlanRunResult[] = [];
+    try {
       for (let i = 0; i < plans.length; i++) {
-        // The quick pass starts at once; every later plan or pass lets pending messages (a cancel) in first.
-        if (i > 0 || crossCheck) await yieldToEvents();
-        if (controller.signal.aborted) return null;
+        // The first plan starts at once; each later one lets pending messages (a cancel) in first.
+        if (i > 0) await yieldToEvents();
+        if (controller.signal.aborted) return post({ kind: 'cancelled', runId });
         const onProgress = (fraction: number) => {
           const t = now();
           if (t - lastProgressMs < PROGRESS_INTERVAL_MS) return;
           lastProgressMs = t;
-          post({ kind: 'progress', runId, fraction: Math.min(1, Math.max(0, from + (share * (i + fraction)) / plans.length)) });
+          post({ kind: 'progress', runId, fraction: Math.min(1, Math.max(0, (i + fraction) / plans.length)) });
         };
         results.push({ id: plans[i].id, result: runPlan(plans[i].plan, { crossCheck, signal: controller.signal, onProgress }) });
       }
-      return results;
-    };
-    try {
-      const quick = await pass(false, 0, QUICK_PASS_SHARE);
-      if (!quick) return post({ kind: 'cancelled', runId });
-      post({ kind: 'result', runId, complete: false, elapsedMs: now() - startMs, results: quick });
-      const full = await pass(true, QUICK_PASS_SHARE, 1 - QUICK_PASS_SHARE);
-      if (!full) return post({ kind: 'cancelled', runId });
-      post({ kind: 'result', runId, complete: true, elapsedMs: now() - startMs, results: full });
+      post({ kind: 'result', runId, complete: crossCheck, elapsedMs: now() - startMs, results });
     } catch (e) {
       if ((e as Error).name === 'AbortError') return post({ kind: 'cancelled', runId });
       post({ kind: 'error', runId, message: `The engine stopped with an error: ${(e as Error).message ?? String(e)}` });
@@ -76,6 +65,6 @@ export function createEngineHandler(runPlan: RunPlanFn, post: (response: EngineR
       return;
     }
     // Validated by planSchema with temperatureUnit 'K' enforced above.
-    await run(request.runId, request.plans as { id: string; plan: PlanK }[]);
+    await run(request.runId, request.crossCheck, request.plans as { id: string; plan: PlanK }[]);
   };
 }

@@ -14,6 +14,8 @@ export const engineRequestSchema = z.discriminatedUnion('kind', [
     .object({
       kind: z.literal('run'),
       runId: runIdSchema,
+      /** false: the quick pass (no second-method checks); true: the full, cross-checked pass. */
+      crossCheck: z.boolean(),
       plans: z
         .array(z.object({ id: z.string().min(1).max(80), plan: planSchema.refine((p) => p.temperatureUnit === 'K', 'the worker takes plans in kelvin') }).strict())
         .min(1, 'a run needs at least one plan')
@@ -24,7 +26,7 @@ export const engineRequestSchema = z.discriminatedUnion('kind', [
 ]);
 
 export type EngineRequest =
-  | { kind: 'run'; runId: number; plans: { id: string; plan: PlanK }[] }
+  | { kind: 'run'; runId: number; crossCheck: boolean; plans: { id: string; plan: PlanK }[] }
   | { kind: 'cancel'; runId: number };
 
 export interface PlanRunResult {
@@ -36,7 +38,7 @@ export const engineResponseSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('result'),
     runId: runIdSchema,
-    /** False for the quick first pass (no cross-checks); the full pass follows with true. */
+    /** The request's crossCheck: false for the quick pass, true for the full one. */
     complete: z.boolean(),
     elapsedMs: z.number(),
     results: z.array(z.object({ id: z.string(), result: z.custom<PlanResult>((r) => typeof r === 'object' && r !== null) })),

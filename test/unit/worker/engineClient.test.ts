@@ -1,10 +1,12 @@
-// The UI side of the worker: the latest request wins, stale replies are dropped, a superseded run
-// that keeps going is ended by a worker restart, Stop restarts at once.
+// The UI side of the engine: a quick lane answers each edit at once, a check lane replaces that answer
+// with the cross-checked one; the latest request wins, stale replies are dropped, a superseded check is
+// ended at once, a superseded quick run that keeps going is ended after the grace time, Stop ends both.
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import demoPlan from '@/library/plans/demo-plan.json';
 import { parsePlan } from '@/schema/parsePlan';
 import type { PlanResult } from '@/engine/plan/planResult';
-import { createEngineClient, SUPERSEDE_GRACE_MS, type EngineStatus, type WorkerLike } from '@/worker/createEngineClient';
+import { createEngineClient, QUICK_PASS_SHARE, SUPERSEDE_GRACE_MS, type EngineStatus } from '@/worker/createEngineClient';
+import type { WorkerLike } from '@/worker/createWorkerLane';
 import type { EngineRequest } from '@/worker/engineMessages';
 
 class FakeWorker implements WorkerLike {
@@ -21,16 +23,18 @@ class FakeWorker implements WorkerLike {
   reply(data: unknown) {
     this.onmessage?.({ data } as MessageEvent);
   }
-  lastRunId() {
-    const runs = this.posted.filter((m) => m.kind === 'run');
-    return runs[runs.length - 1].runId;
+  lastRun() {
+    const runs = this.posted.filter((m): m is Extract<EngineRequest, { kind: 'run' }> => m.kind === 'run');
+    return runs[runs.length - 1];
+  }
+  answer(runId: number, complete: boolean, planName: string) {
+    this.reply({ kind: 'result', runId, complete, elapsedMs: 3, results: [{ id: 'main', result: { planName } as PlanResult }] });
   }
 }
 
 const parsed = parsePlan(demoPlan);
 if (!parsed.ok) throw new Error('demo plan invalid');
-const plan = parsed.plan;
-const resultNamed = (planName: string) => ({ planName }) as PlanResult;
+const plans = [{ id: 'main', plan: parsed.plan }];
 
 function setup() {
   const workers: FakeWorker[] = [];
@@ -44,7 +48,7 @@ function setup() {
       return w;
     },
     {
-      onResults: (results) => shown.push(results[0].result.planName),
+      onResults: (results, info) => shown.push(`${results[0].result.planName}${info.complete ? ' (checked)' : ''}`),
       onProgress: (f) => progress.push(f),
       onStatus: (s) => statuses.push(s),
     },
@@ -56,96 +60,97 @@ describe('engine client', () => {
   beforeEach(() => vi.useFakeTimers());
   afterEach(() => vi.useRealTimers());
 
-  it('shows the result of a single run and goes idle', () => {
+  it('shows the quick answer, then asks a second worker for the cross-checked one, idle after it', () => {
     const { client, workers, shown, statuses } = setup();
-    const id = client.run([{ id: 'main', plan }]);
-    workers[0].reply({ kind: 'result', runId: id, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('first') }] });
-    expect(shown).toEqual(['first']);
+    const id = client.run(plans);
+    const [quick] = workers;
+    expect(quick.lastRun()).toMatchObject({ runId: id, crossCheck: false });
+    quick.answer(id, false, 'quick');
+    expect(shown).toEqual(['quick']);
+    const check = workers[1];
+    expect(check.lastRun()).toMatchObject({ runId: id, crossCheck: true });
+    expect(check.lastRun().plans).toBe(plans);
+    check.answer(id, true, 'full');
+    expect(shown).toEqual(['quick', 'full (checked)']);
     expect(statuses).toEqual(['running', 'idle']);
   });
 
-  it('keeps one run in the worker, replaces the waiting one, and drops the superseded reply', () => {
+  it('a new edit ends the check of the older plan at once and goes to the idle quick worker', () => {
     const { client, workers, shown } = setup();
-    const first = client.run([{ id: 'main', plan }]);
-    client.run([{ id: 'main', plan }]);
-    const third = client.run([{ id: 'main', plan }]);
-    const w = workers[0];
-    // First run posted, then one cancel per superseding request; the waiting request is not posted yet.
-    expect(w.posted.map((m) => m.kind)).toEqual(['run', 'cancel', 'cancel']);
-    w.reply({ kind: 'result', runId: first, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('stale') }] });
+    const first = client.run(plans);
+    workers[0].answer(first, false, 'one');
+    const second = client.run(plans);
+    expect(workers[1].terminated).toBe(true);
+    expect(workers[0].terminated).toBe(false);
+    expect(workers[0].lastRun().runId).toBe(second);
+    workers[1].answer(first, true, 'old check');
+    workers[0].answer(second, false, 'two');
+    // The check of the second plan runs in a fresh worker.
+    expect(workers[2].lastRun()).toMatchObject({ runId: second, crossCheck: true });
+    expect(shown).toEqual(['one', 'two']);
+  });
+
+  it('edits during a quick run wait behind it (the newest one only) and the superseded answer is dropped', () => {
+    const { client, workers, shown } = setup();
+    const first = client.run(plans);
+    client.run(plans);
+    const third = client.run(plans);
+    const [quick] = workers;
+    expect(quick.posted.map((m) => m.kind)).toEqual(['run', 'cancel', 'cancel']);
+    quick.answer(first, false, 'stale');
     expect(shown).toEqual([]);
-    expect(w.lastRunId()).toBe(third);
-    w.reply({ kind: 'result', runId: third, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('latest') }] });
+    expect(quick.lastRun().runId).toBe(third);
+    // No check was asked for the superseded plan.
+    expect(workers).toHaveLength(1);
+    quick.answer(third, false, 'latest');
     expect(shown).toEqual(['latest']);
   });
 
-  it('restarts the worker when a superseded run is still going after the grace time', () => {
+  it('restarts the quick worker when a superseded quick run is still going after the grace time', () => {
     const { client, workers, shown } = setup();
-    const first = client.run([{ id: 'main', plan }]);
-    const second = client.run([{ id: 'main', plan }]);
+    const first = client.run(plans);
+    const second = client.run(plans);
     vi.advanceTimersByTime(SUPERSEDE_GRACE_MS - 1);
     expect(workers).toHaveLength(1);
     vi.advanceTimersByTime(1);
     expect(workers[0].terminated).toBe(true);
-    expect(workers).toHaveLength(2);
-    expect(workers[1].lastRunId()).toBe(second);
-    // A late reply from the dead worker's run is not shown.
-    workers[0].reply({ kind: 'result', runId: first, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('dead') }] });
-    workers[1].reply({ kind: 'result', runId: second, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('fresh') }] });
+    expect(workers[1].lastRun()).toMatchObject({ runId: second, crossCheck: false });
+    workers[0].answer(first, false, 'dead');
+    workers[1].answer(second, false, 'fresh');
     expect(shown).toEqual(['fresh']);
   });
 
-  it('Stop terminates the running worker, reports stopped, and ignores its later replies', () => {
+  it('Stop ends both workers, says stopped, and later replies are not shown', () => {
     const { client, workers, shown, statuses } = setup();
-    const id = client.run([{ id: 'main', plan }]);
-    workers[0].reply({ kind: 'progress', runId: id, fraction: 0.4 });
+    const id = client.run(plans);
+    workers[0].answer(id, false, 'quick');
     client.stop();
-    expect(workers[0].terminated).toBe(true);
+    expect(workers[0].terminated && workers[1].terminated).toBe(true);
     expect(statuses.at(-1)).toBe('stopped');
-    workers[0].reply({ kind: 'result', runId: id, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('late') }] });
-    expect(shown).toEqual([]);
-    // The next request gets a fresh worker.
-    const next = client.run([{ id: 'main', plan }]);
-    expect(workers[1].lastRunId()).toBe(next);
-  });
-
-  it('shows the quick pass at once and the full pass after it, idle only after the full one', () => {
-    const { client, workers, shown, statuses } = setup();
-    const id = client.run([{ id: 'main', plan }]);
-    workers[0].reply({ kind: 'result', runId: id, complete: false, elapsedMs: 1, results: [{ id: 'main', result: resultNamed('quick') }] });
+    workers[1].answer(id, true, 'late');
     expect(shown).toEqual(['quick']);
-    expect(statuses).toEqual(['running']);
-    workers[0].reply({ kind: 'result', runId: id, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('checked') }] });
-    expect(shown).toEqual(['quick', 'checked']);
-    expect(statuses).toEqual(['running', 'idle']);
+    const next = client.run(plans);
+    expect(workers[2].lastRun().runId).toBe(next);
   });
 
-  it('a new request during the full pass restarts the worker at once instead of waiting for the check', () => {
-    const { client, workers, shown } = setup();
-    const first = client.run([{ id: 'main', plan }]);
-    workers[0].reply({ kind: 'result', runId: first, complete: false, elapsedMs: 1, results: [{ id: 'main', result: resultNamed('quick one') }] });
-    const second = client.run([{ id: 'main', plan }]);
-    expect(workers[0].terminated).toBe(true);
-    expect(workers[1].lastRunId()).toBe(second);
-    workers[0].reply({ kind: 'result', runId: first, complete: true, elapsedMs: 3, results: [{ id: 'main', result: resultNamed('old check') }] });
-    workers[1].reply({ kind: 'result', runId: second, complete: false, elapsedMs: 1, results: [{ id: 'main', result: resultNamed('quick two') }] });
-    expect(shown).toEqual(['quick one', 'quick two']);
+  it('progress: the quick pass fills the first share of the bar, the check the rest', () => {
+    const { client, workers, progress } = setup();
+    const id = client.run(plans);
+    workers[0].reply({ kind: 'progress', runId: id, fraction: 0.5 });
+    workers[0].answer(id, false, 'q');
+    workers[1].reply({ kind: 'progress', runId: id, fraction: 0.5 });
+    expect(progress).toEqual([0.5 * QUICK_PASS_SHARE, QUICK_PASS_SHARE + 0.5 * (1 - QUICK_PASS_SHARE)]);
   });
 
-  it('passes progress of the current run and an engine error as an error status', () => {
-    const { client, workers, progress, statuses } = setup();
-    const id = client.run([{ id: 'main', plan }]);
-    workers[0].reply({ kind: 'progress', runId: id, fraction: 0.25 });
-    workers[0].reply({ kind: 'error', runId: id, message: 'The engine stopped with an error: boom' });
-    expect(progress).toEqual([0.25]);
-    expect(statuses.at(-1)).toBe('error');
-  });
-
-  it('treats a malformed reply as an error, not a result', () => {
+  it('an engine error is an error status; a malformed reply too, and it is not shown', () => {
     const { client, workers, shown, statuses } = setup();
-    client.run([{ id: 'main', plan }]);
+    const id = client.run(plans);
+    workers[0].reply({ kind: 'error', runId: id, message: 'The engine stopped with an error: boom' });
+    expect(statuses.at(-1)).toBe('error');
+    const next = client.run(plans);
     workers[0].reply({ kind: 'result', runId: 'one' });
     expect(shown).toEqual([]);
     expect(statuses.at(-1)).toBe('error');
+    expect(next).toBeGreaterThan(id);
   });
 });

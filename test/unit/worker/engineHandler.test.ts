@@ -21,37 +21,40 @@ function harness(runPlan: RunPlanFn, clock = { ms: 0 }) {
 const echoName: RunPlanFn = (p: PlanK) => ({ planName: p.name }) as PlanResult;
 
 describe('engine worker handler', () => {
-  it('answers twice, quick pass without cross-checks then the full pass, one result per plan keyed by id', async () => {
+  it.each([false, true])('crossCheck %s: one pass with that flag, one result per plan keyed by id', async (crossCheck) => {
     const calls: (boolean | undefined)[] = [];
     const { handle, replies } = harness((p, options) => {
       calls.push(options?.crossCheck);
       return echoName(p);
     });
-    await handle({ kind: 'run', runId: 7, plans: [{ id: 'main', plan }, { id: 'v1', plan: { ...plan, name: 'variant one' } }] });
-    expect(calls).toEqual([false, false, true, true]);
-    expect(replies.map((r) => (r.kind === 'result' ? [r.runId, r.complete] : r.kind))).toEqual([
-      [7, false],
-      [7, true],
+    await handle({ kind: 'run', runId: 7, crossCheck, plans: [{ id: 'main', plan }, { id: 'v1', plan: { ...plan, name: 'variant one' } }] });
+    expect(calls).toEqual([crossCheck, crossCheck]);
+    expect(replies).toHaveLength(1);
+    const reply = replies[0];
+    if (reply.kind !== 'result') throw new Error(`expected a result, got ${reply.kind}`);
+    expect([reply.runId, reply.complete]).toEqual([7, crossCheck]);
+    expect(reply.results.map((r) => [r.id, r.result.planName])).toEqual([
+      ['main', plan.name],
+      ['v1', 'variant one'],
     ]);
-    for (const reply of replies) {
-      if (reply.kind !== 'result') continue;
-      expect(reply.results.map((r) => [r.id, r.result.planName])).toEqual([
-        ['main', plan.name],
-        ['v1', 'variant one'],
-      ]);
-    }
+  });
+
+  it('refuses a run without the crossCheck flag', async () => {
+    const { handle, replies } = harness(echoName);
+    await handle({ kind: 'run', runId: 8, plans: [{ id: 'main', plan }] });
+    expect(replies[0]).toMatchObject({ kind: 'error', runId: 8, message: expect.stringMatching(/crossCheck/) });
   });
 
   it('refuses a plan that fails the plan schema, naming the field', async () => {
     const { handle, replies } = harness(echoName);
     const bad = { ...plan, stages: [] };
-    await handle({ kind: 'run', runId: 3, plans: [{ id: 'main', plan: bad }] });
+    await handle({ kind: 'run', runId: 3, crossCheck: false, plans: [{ id: 'main', plan: bad }] });
     expect(replies).toEqual([{ kind: 'error', runId: 3, message: expect.stringMatching(/stages.*at least one stage/) }]);
   });
 
   it('refuses a plan in degC: the worker takes kelvin only', async () => {
     const { handle, replies } = harness(echoName);
-    await handle({ kind: 'run', runId: 4, plans: [{ id: 'main', plan: demoPlan }] });
+    await handle({ kind: 'run', runId: 4, crossCheck: false, plans: [{ id: 'main', plan: demoPlan }] });
     expect(replies[0]).toMatchObject({ kind: 'error', runId: 4, message: expect.stringMatching(/kelvin/) });
   });
 
@@ -67,19 +70,11 @@ describe('engine worker handler', () => {
       calls++;
       return echoName(p);
     });
-    const running = handle({ kind: 'run', runId: 1, plans: [{ id: 'main', plan }, { id: 'v1', plan }] });
+    const running = handle({ kind: 'run', runId: 1, crossCheck: false, plans: [{ id: 'main', plan }, { id: 'v1', plan }] });
     await handle({ kind: 'cancel', runId: 1 });
     await running;
     expect(calls).toBe(1);
     expect(replies).toEqual([{ kind: 'cancelled', runId: 1 }]);
-  });
-
-  it('a cancel after the quick pass stops the full pass', async () => {
-    const { handle, replies } = harness(echoName);
-    const running = handle({ kind: 'run', runId: 5, plans: [{ id: 'main', plan }] });
-    await handle({ kind: 'cancel', runId: 5 });
-    await running;
-    expect(replies.map((r) => (r.kind === 'result' ? `result complete=${r.complete}` : r.kind))).toEqual(['result complete=false', 'cancelled']);
   });
 
   it('an engine AbortError is a cancellation, not an error', async () => {
@@ -88,7 +83,7 @@ describe('engine worker handler', () => {
       e.name = 'AbortError';
       throw e;
     });
-    await handle({ kind: 'run', runId: 6, plans: [{ id: 'main', plan }] });
+    await handle({ kind: 'run', runId: 6, crossCheck: false, plans: [{ id: 'main', plan }] });
     expect(replies).toEqual([{ kind: 'cancelled', runId: 6 }]);
   });
 
@@ -101,20 +96,19 @@ describe('engine worker handler', () => {
       }
       return echoName(p);
     }, clock);
-    await handle({ kind: 'run', runId: 2, plans: [{ id: 'main', plan }, { id: 'v1', plan }] });
+    await handle({ kind: 'run', runId: 2, crossCheck: false, plans: [{ id: 'main', plan }, { id: 'v1', plan }] });
     const fractions = replies.filter((r) => r.kind === 'progress').map((r) => (r.kind === 'progress' ? r.fraction : NaN));
-    // Each runPlan call reports 0, 0.5, 1 at 25 ms steps: 12 calls at t = 0, 25, ..., 275 ms. The quick pass
-    // fills [0, 0.25] and the full pass [0.25, 1], each split over the 2 plans, so the overall fractions are
-    //   quick: 0, 0.0625, 0.125 | 0.125, 0.1875, 0.25    full: 0.25, 0.4375, 0.625 | 0.625, 0.8125, 1.
-    // Only calls at least 50 ms after the last one sent go out: t = 0, 50, 100, ..., 250 ms.
-    expect(fractions).toEqual([0, 0.125, 0.1875, 0.25, 0.625, 0.8125]);
+    // Each runPlan call reports 0, 0.5, 1 at 25 ms steps: 6 calls at t = 0, 25, ..., 125 ms, overall
+    // 0, 0.25, 0.5 (plan 1) and 0.5, 0.75, 1 (plan 2). Only calls at least 50 ms after the last one sent
+    // go out: t = 0, 50, 100 ms.
+    expect(fractions).toEqual([0, 0.5, 0.75]);
   });
 
   it('turns an exception in the engine into an error reply', async () => {
     const { handle, replies } = harness(() => {
       throw new Error('matrix went singular');
     });
-    await handle({ kind: 'run', runId: 9, plans: [{ id: 'main', plan }] });
+    await handle({ kind: 'run', runId: 9, crossCheck: false, plans: [{ id: 'main', plan }] });
     expect(replies).toEqual([{ kind: 'error', runId: 9, message: 'The engine stopped with an error: matrix went singular' }]);
   });
 });
