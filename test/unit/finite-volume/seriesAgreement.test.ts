@@ -94,3 +94,18 @@ describe('starting from an exact series field', () => {
     });
   }
 });
+
+describe('the depth point', () => {
+  // depthM below the surface, x* = 1 - depthM / L, against the exact series at that position.
+  for (const shape of ['slab', 'cylinder', 'sphere'] as Shape1D[]) {
+    for (const depthFraction of [0.07, 0.3]) {
+      it(`${shape}, Bi 10, Fo 0.05, depth ${depthFraction} L: within ${THETA_TOLERANCE} in theta`, () => {
+        const problem = { ...problemAt(shape, 10, 0.05), depthM: depthFraction * LENGTH_M };
+        const solution = solved(solveFiniteVolumeStage(problem));
+        const got = (lastOf(solution, 'depth') - MEDIUM_K) / SPAN_K;
+        const expected = exactTheta(shape, 10, 0.05).at(1 - depthFraction);
+        expect(Math.abs(got - expected), `${shape} depth ${depthFraction} L: got theta ${got}, expected ${expected}, tolerance ${THETA_TOLERANCE}`).toBeLessThan(THETA_TOLERANCE);
+      });
+    }
+  }
+});

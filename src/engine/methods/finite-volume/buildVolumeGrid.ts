@@ -31,9 +31,10 @@ export function areaExponentOf(geometry: SeriesGeometry): number {
  * Node positions x/L = 1 - sinh(beta (1 - xi)) / sinh(beta), xi = i/N: a smooth stretching that clusters nodes
  * at the surface (spacing ratio beta / sinh(beta) there), which keeps the scheme second order.
  * Vinokur, On one-dimensional stretching functions for finite-difference calculations, J. Comput. Phys. 50 (1983) (from memory).
- * `pinnedM` are positions that get a node of their own (the nearest interior node moves there).
+ * `pinnedM` are positions that get a node of their own: the nearest interior node whose index is a multiple of
+ * `pinStride` moves there (stride 2 keeps the pinned node on the coarse grid of a Richardson pair).
  */
-export function buildVolumeGrid(geometry: SeriesGeometry, lengthM: number, cellCount: number, stretch: number, pinnedM: readonly number[], basisVolume: number): VolumeGrid {
+export function buildVolumeGrid(geometry: SeriesGeometry, lengthM: number, cellCount: number, stretch: number, pinnedM: readonly number[], pinStride: number, basisVolume: number): VolumeGrid {
   const n = cellCount + 1;
   const nodesM = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -42,15 +43,16 @@ export function buildVolumeGrid(geometry: SeriesGeometry, lengthM: number, cellC
   }
   nodesM[0] = 0;
   nodesM[cellCount] = lengthM;
-  for (const p of pinnedM) pinNode(nodesM, p);
+  for (const p of pinnedM) pinNode(nodesM, p, pinStride);
   return gridOnNodes(geometry, lengthM, nodesM, basisVolume);
 }
 
-function pinNode(nodesM: Float64Array, positionM: number): void {
+function pinNode(nodesM: Float64Array, positionM: number, stride: number): void {
   const last = nodesM.length - 1;
-  let best = 1;
-  for (let i = 1; i < last; i++) if (Math.abs(nodesM[i] - positionM) < Math.abs(nodesM[best] - positionM)) best = i;
-  if (Math.abs(nodesM[best] - positionM) === 0 || positionM <= 0 || positionM >= nodesM[last]) return;
+  if (last <= stride || positionM <= 0 || positionM >= nodesM[last]) return;
+  let best = stride;
+  for (let i = stride; i < last; i += stride) if (Math.abs(nodesM[i] - positionM) < Math.abs(nodesM[best] - positionM)) best = i;
+  if (Math.abs(nodesM[best] - positionM) === 0) return;
   // Move only if the order of the nodes is kept with a margin of a quarter of the neighbouring spacing.
   const lo = nodesM[best - 1] + 0.25 * (nodesM[best] - nodesM[best - 1]);
   const hi = nodesM[best + 1] - 0.25 * (nodesM[best + 1] - nodesM[best]);

@@ -144,7 +144,7 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
   const stretch = overrides.stretch ?? sized.stretch;
   const pinned = [problem.depthM, targetDepthM].filter((d): d is number => d !== undefined).map(depthX);
   const fineCells = extrapolate ? 2 * cellCount : cellCount;
-  const sizedFine = buildVolumeGrid(oneD.geometry, lengthM, fineCells, stretch, pinned, geometry.volumeM3);
+  const sizedFine = buildVolumeGrid(oneD.geometry, lengthM, fineCells, stretch, pinned, extrapolate ? 2 : 1, geometry.volumeM3);
   // A previous stage's grid at least as fine everywhere is kept (with an odd node count, its even nodes make the
   // coarse grid): no interpolation, and no energy change, at the joint.
   const reuse =
