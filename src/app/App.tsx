@@ -38,6 +38,15 @@ function UnitSwitch() {
   return <UnitToggle value={system} onChange={setUnitSystem} />;
 }
 
+function SaveProblem() {
+  const problem = useAppStore((s) => s.saveProblem);
+  return problem ? (
+    <div className="notice" role="alert">
+      <span>⚠ {problem}</span>
+    </div>
+  ) : null;
+}
+
 function Shell({ workbench }: { workbench: Workbench }) {
   useUndoShortcuts(workbench.store);
   const hash = useHashRoute();
@@ -66,6 +75,7 @@ function Shell({ workbench }: { workbench: Workbench }) {
       </header>
       <ExchangeToolbar />
       <EngineStatusBar onStop={() => workbench.engine.stop()} onRecompute={workbench.recompute} />
+      <SaveProblem />
       {notice && (
         <div className="notice" role="alert">
           <span>{notice}</span>

@@ -25,8 +25,9 @@ export function startAutosave(store: AppStore, storage: Pick<Storage, 'setItem'>
       writeUserLibrary(storage, userLibrary);
       error = null;
     } catch (e) {
-      error = `Autosave failed: ${(e as Error).message}`;
+      error = `Autosave failed (${(e as Error).message}): edits since then are not kept in this browser; save the plan to a file.`;
     }
+    store.getState().setSaveProblem(error);
   };
   const unsubscribe = store.subscribe((s, prev) => {
     if (s.document === prev.document && s.unitSystem === prev.unitSystem && s.userLibrary === prev.userLibrary) return;

@@ -7,8 +7,11 @@ import type { AppState } from './appState';
 export interface ViewSlice {
   selectedStageIndex: number;
   unitSystem: UnitSystem;
+  /** Why the last autosave failed (storage full or blocked), or null when saving works. */
+  saveProblem: string | null;
   selectStage(index: number): void;
   setUnitSystem(system: UnitSystem): void;
+  setSaveProblem(problem: string | null): void;
 }
 
 export const createViewSlice =
@@ -16,11 +19,15 @@ export const createViewSlice =
   (set, get) => ({
     selectedStageIndex: 0,
     unitSystem,
+    saveProblem: null,
     selectStage(index) {
       const count = get().document.main.stages.length;
       set({ selectedStageIndex: Math.max(0, Math.min(count - 1, index)) });
     },
     setUnitSystem(system) {
       set({ unitSystem: system });
+    },
+    setSaveProblem(problem) {
+      if (get().saveProblem !== problem) set({ saveProblem: problem });
     },
   });

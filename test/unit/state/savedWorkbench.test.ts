@@ -65,6 +65,7 @@ describe('autosave', () => {
     store.getState().renamePlan('x');
     autosave.flush();
     expect(autosave.lastError()).toMatch(/QuotaExceededError/);
+    expect(store.getState().saveProblem).toMatch(/Autosave failed \(QuotaExceededError\): edits since then are not kept/);
     autosave.stop();
   });
 });
