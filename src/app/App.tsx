@@ -4,6 +4,8 @@ import { Suspense, useState } from 'react';
 import { UnitToggle } from '@/features/units/UnitToggle';
 import { ExchangeToolbar } from '@/features/exchange/ExchangeToolbar';
 import { TextField } from '@/features/part/TextField';
+import { validateEdit } from '@/features/part/validateEdit';
+import { planBodySchema } from '@/schema/planSchema';
 import { AppStoreProvider } from '@/state/AppStoreProvider';
 import { useAppStore } from '@/state/useAppStore';
 import type { Workbench } from './startWorkbench';
@@ -23,9 +25,9 @@ function PlanNameField() {
       label="Plan"
       value={name}
       onCommit={(next) => {
-        if (next.trim() === '') return 'Plan name: must not be empty.';
-        if (next.length > 200) return 'Plan name: may be at most 200 characters.';
-        renamePlan(next);
+        const checked = validateEdit(planBodySchema.shape.name, next, 'Plan name');
+        if (!checked.ok) return checked.message;
+        renamePlan(checked.value);
         return null;
       }}
     />

@@ -126,6 +126,14 @@ describe('workbench shell', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/Heat transfer coefficient h: unit "parsecs" is not known here/);
   });
 
+  it('an empty plan name is refused with the schema message and the name is kept', async () => {
+    const { workbench } = await openShell();
+    const before = workbench.store.getState().document.main.name;
+    fireEvent.change(screen.getByLabelText('Plan'), { target: { value: '' } });
+    expect(screen.getByRole('alert').textContent).toBe('⚠ Plan name: plan name is empty.');
+    expect(workbench.store.getState().document.main.name).toBe(before);
+  });
+
   it('shows the warnings of the result with their rule in the stage report', async () => {
     await openShell();
     const report = screen.getByRole('region', { name: /report/ });

@@ -1,5 +1,5 @@
 // The part: shape and its sizes, material, and the temperature it starts the first stage at.
-import { shapeSchema, type Material, type Part, type Shape, type ShapeKind } from '@/schema/planSchema';
+import { planBodySchema, shapeSchema, type Material, type Part, type Shape, type ShapeKind } from '@/schema/planSchema';
 import type { MaterialEntry } from '@/library/libraryEntrySchema';
 import type { UnitSystem } from '@/features/units/unitSystem';
 import { MaterialEditor } from './MaterialEditor';
@@ -57,7 +57,9 @@ export function PartEditor({ part, initialTemperatureK, system, materials, onSha
         valueSI={initialTemperatureK}
         system={system}
         onCommit={(t) => {
-          onInitialTemperature(t);
+          const checked = validateEdit(planBodySchema.shape.initialTemperature, t, 'Starting temperature');
+          if (!checked.ok) return checked.message;
+          onInitialTemperature(checked.value);
           return null;
         }}
       />
