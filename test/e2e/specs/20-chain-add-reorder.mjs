@@ -24,6 +24,10 @@ export async function run({ page, baseUrl, shot }) {
   await page.getByRole('button', { name: '◀ Move earlier' }).click();
   names = await stageNames(page);
   assert(names[0] === newName, `Move earlier twice did not bring "${newName}" to the front: ${names.join(', ')}`);
+  // Mouse: drag the first block onto the last.
+  await stageBlocks(page).nth(0).dragTo(stageBlocks(page).nth(names.length - 1));
+  const dragged = await stageNames(page);
+  assert(dragged[dragged.length - 1] === newName, `dragging "${newName}" onto the last block did not move it there: ${dragged.join(', ')}`);
   await waitForResults(page);
   await shot('reordered');
 }
