@@ -1,0 +1,90 @@
+// Time-step control and sampling of the finite-shape solver through a water quench whose h(Ts) is a boiling curve
+// with a steep nucleate-boiling peak (the plan fixture short-cylinder-hub.json, stage 2: the library's still-water
+// curve, 350 -> 15000 W/(m² K) between 600 °C and 300 °C, on plain carbon steel from 1100 K to centre 300 °C).
+// No exact solution exists, so the reference is the same solver on the same grid at a tenth of the tolerance:
+// a time-step convergence check (Roache, Verification and Validation in Computational Science and Engineering,
+// 1998, Ch. 5 (from memory)). The grid is held at 40 x 40 cells for both runs, so the difference is the time
+// stepping and the sampling only; the grid's own error (the timing of the wetting front along the faces, 10-20 K
+// at the face points between 40 and 80 cells) is reported in docs/methods/product-solutions.md, not bounded here.
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { finiteVolume2DSolver } from '@/engine/methods/finite-volume-2d/solveFiniteVolume2DStage';
+import { geometryOf } from '@/engine/geometry/geometry';
+import { materialModel } from '@/engine/properties/materialModel';
+import { surfaceBoundary } from '@/engine/properties/surfaceBoundary';
+import { parsePlan } from '@/schema/parsePlan';
+import type { StageProblem, StageSolution } from '@/engine/methods/stageProblem';
+import type { PointId, Shape } from '@/schema/planSchema';
+import { solved } from './finiteShapeFixture';
+
+/** Guard against a stuck run on a loaded machine (the tight runs take several seconds); not a speed check. */
+const SLOW_CASE_TIMEOUT_MS = 120_000;
+const TOLERANCE_K = 0.01;
+/** The default 2-D grid, held fixed so that the tighter run refines only the steps. */
+const NODES_PER_AXIS = 41;
+const START_K = 1100;
+const CENTRE_TARGET_K = 573.15;
+const SAMPLE_COUNT = 201;
+/**
+ * Time-stepping error at toleranceK 0.01 K: the local error per step is held to 1e-4 K while a surface node is in
+ * transition boiling (errors grow there) and 1e-3 K elsewhere. Measured against the run at a tenth of the tolerance
+ * (10^(1/3) shorter steps, so its own error is about a fifth): 0.081-0.086 K at the face points, 0.06 K at the
+ * edge, 0.006 K at the centre and the mean, for both shapes. The bound is the brief's aim of 0.1 K at every
+ * reported point; the arithmetic is deterministic, so the 15 % margin guards against a looser step control.
+ * Before this control the short cylinder's target-ended samples were 25-38 K off.
+ */
+const TIME_ERROR_K = 0.1;
+/**
+ * A point-temperature end and a duration end of the same length take the same steps up to the last one and are
+ * sampled by the same Hermite rule, so their samples agree far closer than the time error (measured below 1e-3 K).
+ */
+const SAME_STEPS_K = 0.01;
+
+const plan = parsePlan(JSON.parse(readFileSync('test/fixtures/plans/short-cylinder-hub.json', 'utf8')));
+if (!plan.ok) throw new Error(`fixture plan does not parse: ${JSON.stringify(plan.issues)}`);
+const { part, stages } = plan.plan;
+const water = stages[1].medium;
+const solve = finiteVolume2DSolver({ nodesPerAxis: NODES_PER_AXIS });
+
+function quench(shape: Shape, end: StageProblem['end'], toleranceK: number): StageSolution {
+  return solved(
+    solve({ geometry: geometryOf(shape), material: materialModel(part.material), boundary: surfaceBoundary(water), start: { kind: 'uniform', temperatureK: START_K }, end, toleranceK, sampleCount: SAMPLE_COUNT, propertyTemperatureK: 800 }),
+  );
+}
+
+function largest(a: StageSolution, b: StageSolution, id: PointId): { differenceK: number; where: string } {
+  const x = a.samples.temperaturesK[id]!;
+  const y = b.samples.temperaturesK[id]!;
+  let differenceK = 0;
+  let where = '';
+  for (let i = 0; i < x.length; i++) {
+    const d = Math.abs(x[i] - y[i]);
+    if (d > differenceK) {
+      differenceK = d;
+      where = `t = ${a.samples.timeS[i].toFixed(2)} s: ${x[i].toFixed(3)} K vs ${y[i].toFixed(3)} K`;
+    }
+  }
+  return { differenceK, where };
+}
+
+const shapes: [string, Shape][] = [
+  ['short cylinder r0 30 mm, half-length 25 mm', part.shape],
+  ['bar 60 x 50 mm', { kind: 'bar', halfWidthM: 0.03, halfHeightM: 0.025 }],
+];
+
+describe('step control through a water boiling curve (40 x 40 cells held fixed)', () => {
+  for (const [name, shape] of shapes) {
+    it(`${name}: centre to 300 °C; target-ended samples vs a duration run at a tenth of the tolerance`, { timeout: SLOW_CASE_TIMEOUT_MS }, () => {
+      const target = quench(shape, { kind: 'point-temperature', point: 'centre', temperatureK: CENTRE_TARGET_K }, TOLERANCE_K);
+      expect(Math.abs(target.samples.temperaturesK.centre!.at(-1)! - CENTRE_TARGET_K), 'centre lands on 300 °C').toBeLessThan(1e-3);
+      const reference = quench(shape, { kind: 'duration', seconds: target.durationS }, TOLERANCE_K / 10);
+      const sameSteps = quench(shape, { kind: 'duration', seconds: target.durationS }, TOLERANCE_K);
+      for (const id of Object.keys(target.samples.temperaturesK) as PointId[]) {
+        const time = largest(target, reference, id);
+        expect(time.differenceK, `${name}, ${id}: target-ended at ${TOLERANCE_K} K vs duration at ${TOLERANCE_K / 10} K over ${target.durationS.toFixed(2)} s, largest ${time.differenceK.toFixed(4)} K (${time.where}), bound ${TIME_ERROR_K} K`).toBeLessThan(TIME_ERROR_K);
+        const same = largest(target, sameSteps, id);
+        expect(same.differenceK, `${name}, ${id}: target-ended vs duration-ended, both at ${TOLERANCE_K} K, largest ${same.differenceK.toFixed(5)} K (${same.where}), bound ${SAME_STEPS_K} K`).toBeLessThan(SAME_STEPS_K);
+      }
+    });
+  }
+});
