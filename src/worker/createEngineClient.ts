@@ -1,6 +1,7 @@
 // The UI side of the engine: two workers, so that the answer to an edit never waits for the check
 // of an older plan. The quick lane runs each plan without cross-checks and its result is shown at
-// once; the check lane then runs the same plan with every stage cross-checked and replaces it.
+// once; the check lane then runs the same plan with every stage cross-checked and replaces it,
+// starting CHECK_DELAY_MS after the quick answer (a pause in the editing).
 // The latest request wins: a new edit ends the check lane's run at once (terminate; it restarts on
 // its next run) and queues behind the quick lane's run, which gets SUPERSEDE_GRACE_MS to finish
 // before that worker too is restarted. Replies of superseded runs are dropped. Stop ends both.
@@ -10,6 +11,8 @@ import { createWorkerLane, type WorkerLike } from './createWorkerLane';
 
 /** How long a superseded quick run may finish on its own before its worker is restarted. */
 export const SUPERSEDE_GRACE_MS = 250;
+/** The cross-check starts this long after the quick answer, so that while the user keeps editing it does not compete for the CPU. */
+export const CHECK_DELAY_MS = 200;
 /** Share of the progress bar given to the quick pass (it takes about a quarter of the full one). */
 export const QUICK_PASS_SHARE = 0.25;
 
@@ -44,6 +47,11 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
   let latest: { runId: number; plans: RunRequest['plans'] } | null = null;
   let quickWaiting: RunRequest | null = null;
   let graceTimer: ReturnType<typeof setTimeout> | null = null;
+  let checkTimer: ReturnType<typeof setTimeout> | null = null;
+  const clearCheckTimer = () => {
+    if (checkTimer !== null) clearTimeout(checkTimer);
+    checkTimer = null;
+  };
 
   const clearGrace = () => {
     if (graceTimer !== null) clearTimeout(graceTimer);
@@ -51,6 +59,7 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
   };
   const isLatest = (runId: number | null) => runId !== null && latest?.runId === runId;
   const failed = (message: string) => {
+    clearCheckTimer();
     quick.restart();
     check.restart();
     quickWaiting = null;
@@ -75,7 +84,12 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
       }
       if (isLatest(reply.runId) && reply.kind === 'result' && latest) {
         events.onResults(reply.results, { runId: reply.runId, elapsedMs: reply.elapsedMs, complete: false });
-        check.post({ kind: 'run', runId: reply.runId, crossCheck: true, plans: latest.plans });
+        const request: RunRequest = { kind: 'run', runId: reply.runId, crossCheck: true, plans: latest.plans };
+        clearCheckTimer();
+        checkTimer = setTimeout(() => {
+          checkTimer = null;
+          if (isLatest(request.runId)) check.post(request);
+        }, CHECK_DELAY_MS);
       } else if (isLatest(reply.runId) && reply.kind === 'error') {
         events.onStatus('error', reply.message);
       }
@@ -101,6 +115,7 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
     run(plans) {
       const runId = nextRunId++;
       latest = { runId, plans };
+      clearCheckTimer();
       // The check of an older plan is not worth waiting for.
       if (check.busyWith() !== null) check.restart();
       const request: RunRequest = { kind: 'run', runId, crossCheck: false, plans };
@@ -120,8 +135,9 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
       return runId;
     },
     stop() {
-      const busy = quick.busyWith() !== null || check.busyWith() !== null || quickWaiting !== null;
+      const busy = quick.busyWith() !== null || check.busyWith() !== null || quickWaiting !== null || checkTimer !== null;
       clearGrace();
+      clearCheckTimer();
       quickWaiting = null;
       latest = null;
       quick.restart();
@@ -130,6 +146,7 @@ export function createEngineClient(createWorker: () => WorkerLike, events: Engin
     },
     dispose() {
       clearGrace();
+      clearCheckTimer();
       quickWaiting = null;
       latest = null;
       quick.restart();

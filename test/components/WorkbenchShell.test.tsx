@@ -8,6 +8,7 @@ import { act, cleanup, fireEvent, render, screen, within } from '@testing-librar
 import type { EngineRequest } from '@/worker/engineMessages';
 import type { WorkerLike } from '@/worker/createWorkerLane';
 import { SAVED_DOCUMENT_KEY } from '@/state/savedWorkbench';
+import { CHECK_DELAY_MS } from '@/worker/createEngineClient';
 import { quenchedShaftResult } from './fixtures/quenchedShaftResult';
 
 const plotly = vi.hoisted(() => ({ react: vi.fn(() => Promise.resolve()), purge: vi.fn() }));
@@ -66,6 +67,8 @@ async function openShell(storage = new MemoryStorage()) {
   stopWorkbench = workbench.stop;
   render(<App workbench={workbench} />);
   await act(async () => {});
+  // The cross-check starts after a short pause (CHECK_DELAY_MS).
+  await act(() => new Promise((r) => setTimeout(r, CHECK_DELAY_MS + 20)));
   return { workbench, storage };
 }
 

@@ -5,7 +5,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import demoPlan from '@/library/plans/demo-plan.json';
 import { parsePlan } from '@/schema/parsePlan';
 import type { PlanResult } from '@/engine/plan/planResult';
-import { createEngineClient, QUICK_PASS_SHARE, SUPERSEDE_GRACE_MS, type EngineStatus } from '@/worker/createEngineClient';
+import { CHECK_DELAY_MS, createEngineClient, QUICK_PASS_SHARE, SUPERSEDE_GRACE_MS, type EngineStatus } from '@/worker/createEngineClient';
 import type { WorkerLike } from '@/worker/createWorkerLane';
 import type { EngineRequest } from '@/worker/engineMessages';
 
@@ -67,6 +67,10 @@ describe('engine client', () => {
     expect(quick.lastRun()).toMatchObject({ runId: id, crossCheck: false });
     quick.answer(id, false, 'quick');
     expect(shown).toEqual(['quick']);
+    // The check waits for a pause in the editing.
+    vi.advanceTimersByTime(CHECK_DELAY_MS - 1);
+    expect(workers).toHaveLength(1);
+    vi.advanceTimersByTime(1);
     const check = workers[1];
     expect(check.lastRun()).toMatchObject({ runId: id, crossCheck: true });
     expect(check.lastRun().plans).toBe(plans);
@@ -79,12 +83,14 @@ describe('engine client', () => {
     const { client, workers, shown } = setup();
     const first = client.run(plans);
     workers[0].answer(first, false, 'one');
+    vi.advanceTimersByTime(CHECK_DELAY_MS);
     const second = client.run(plans);
     expect(workers[1].terminated).toBe(true);
     expect(workers[0].terminated).toBe(false);
     expect(workers[0].lastRun().runId).toBe(second);
     workers[1].answer(first, true, 'old check');
     workers[0].answer(second, false, 'two');
+    vi.advanceTimersByTime(CHECK_DELAY_MS);
     // The check of the second plan runs in a fresh worker.
     expect(workers[2].lastRun()).toMatchObject({ runId: second, crossCheck: true });
     expect(shown).toEqual(['one', 'two']);
@@ -124,6 +130,7 @@ describe('engine client', () => {
     const { client, workers, shown, statuses } = setup();
     const id = client.run(plans);
     workers[0].answer(id, false, 'quick');
+    vi.advanceTimersByTime(CHECK_DELAY_MS);
     client.stop();
     expect(workers[0].terminated && workers[1].terminated).toBe(true);
     expect(statuses.at(-1)).toBe('stopped');
@@ -133,11 +140,23 @@ describe('engine client', () => {
     expect(workers[2].lastRun().runId).toBe(next);
   });
 
+  it('an edit during the pause before the check means no check is run for the older plan', () => {
+    const { client, workers } = setup();
+    const first = client.run(plans);
+    workers[0].answer(first, false, 'one');
+    vi.advanceTimersByTime(CHECK_DELAY_MS / 2);
+    const second = client.run(plans);
+    vi.advanceTimersByTime(CHECK_DELAY_MS);
+    expect(workers).toHaveLength(1);
+    expect(workers[0].lastRun().runId).toBe(second);
+  });
+
   it('progress: the quick pass fills the first share of the bar, the check the rest', () => {
     const { client, workers, progress } = setup();
     const id = client.run(plans);
     workers[0].reply({ kind: 'progress', runId: id, fraction: 0.5 });
     workers[0].answer(id, false, 'q');
+    vi.advanceTimersByTime(CHECK_DELAY_MS);
     workers[1].reply({ kind: 'progress', runId: id, fraction: 0.5 });
     expect(progress).toEqual([0.5 * QUICK_PASS_SHARE, QUICK_PASS_SHARE + 0.5 * (1 - QUICK_PASS_SHARE)]);
   });
