@@ -20,6 +20,9 @@ export interface MaterialTable {
   heatCapacityJPerM3K: Float64Array;
   /** e at the grid temperatures, J/m³, zero at lowK. */
   enthalpyJPerM3: Float64Array;
+  /** Slopes of k and C on each interval (index j: from grid temperature j to j + 1), for look-ups without differences. */
+  conductivitySlopeWPerMK2: Float64Array;
+  heatCapacitySlopeJPerM3K2: Float64Array;
 }
 
 export function tabulateMaterial(material: MaterialModel, lowK: number, highK: number): MaterialTable {
@@ -37,7 +40,13 @@ export function tabulateMaterial(material: MaterialModel, lowK: number, highK: n
     // Trapezoid rule: exact for the piecewise-linear C between grid temperatures.
     if (j > 0) e[j] = e[j - 1] + 0.5 * stepK * (c[j - 1] + c[j]);
   }
-  return { lowK, stepK, intervals, conductivityWPerMK: k, heatCapacityJPerM3K: c, enthalpyJPerM3: e };
+  const dk = new Float64Array(intervals);
+  const dc = new Float64Array(intervals);
+  for (let j = 0; j < intervals; j++) {
+    dk[j] = (k[j + 1] - k[j]) / stepK;
+    dc[j] = (c[j + 1] - c[j]) / stepK;
+  }
+  return { lowK, stepK, intervals, conductivityWPerMK: k, heatCapacityJPerM3K: c, enthalpyJPerM3: e, conductivitySlopeWPerMK2: dk, heatCapacitySlopeJPerM3K2: dc };
 }
 
 /**

@@ -5,17 +5,20 @@
 // w = sqrt(2)/4, with the embedded third-order weights ((1-w)/3, (3w+1)/3, d/3): Hosea and Shampine,
 // Analysis and implementation of TR-BDF2, Appl. Numer. Math. 20 (1996) (from memory).
 // Validity: any step size (L-stable: no oscillation at large Bi or on the first step); second order in time.
-// Convergence rule: Newton per stage until the enthalpy residual over V C is below newtonTolK (kelvin);
+// Convergence rule: simplified Newton per stage (the matrix of the predicted state, re-formed when a correction is
+// not below NEWTON_CONTRACTION_MAX of the one before; Hairer and Wanner, Solving ODEs II, 2nd ed., Sec. IV.8, from
+// memory), from a quadratic predictor, until the enthalpy residual over V C is below newtonTolK (kelvin);
 // a stage that does not converge in MAX_NEWTON_ITERATIONS, or a step that leaves a cp peak unresolved, is refused.
-// Error: local error estimate h * sum (bhat - b) F, filtered by (V C - d h dF/dT)^-1 as Hosea and Shampine do,
-// in kelvin per node. Both stages are written as enthalpy differences equal to weighted sums of the fluxes, so
-// the stored energy changes by exactly the heat that crosses the surface (to the Newton tolerance).
+// Error: local error estimate h * sum (bhat - b) F, filtered by (V C - d h dF/dT)^-1 as Hosea and Shampine do
+// (the factorised matrix of the second stage), in kelvin per node. Both stages are written as enthalpy differences
+// equal to weighted sums of the fluxes, and the converged stage enthalpy is set from that balance, so the stored
+// energy changes by exactly the heat that crosses the surface (to rounding); T is within newtonTolK of e^-1(e).
 // Space: fluxes through faces with the harmonic-mean conductivity 2 k_P k_E / (k_P + k_E),
 // Patankar, Numerical Heat Transfer and Fluid Flow, 1980, Eq. 4.9 (from memory).
 import type { SurfaceBoundary } from '../../properties/surfaceBoundary';
-import { solveTridiagonal } from '../../numerics/solveTridiagonal';
+import { createFactoredTridiagonal, factorTridiagonal, solveFactoredTridiagonal } from './factoredTridiagonal';
 import type { VolumeGrid } from './buildVolumeGrid';
-import { evaluateMaterial, type MaterialTable } from './tabulateMaterial';
+import type { MaterialTable } from './tabulateMaterial';
 
 const GAMMA = 2 - Math.SQRT2;
 const D = GAMMA / 2;
@@ -25,6 +28,8 @@ const ERR_WEIGHT_START = (1 - 4 * W) / 3;
 const ERR_WEIGHT_MID = 1 / 3;
 const ERR_WEIGHT_END = (-2 * D) / 3;
 const MAX_NEWTON_ITERATIONS = 25;
+/** Simplified Newton keeps its matrix while each correction is at most this share of the one before. Common practice. */
+const NEWTON_CONTRACTION_MAX = 0.2;
 /**
  * A step whose enthalpy change differs from the trapezoid of its end capacities by more than this fraction
  * has stepped over a feature of C(T) narrower than the step (a latent-heat peak): it is refused. Common practice.
@@ -56,8 +61,8 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   let t0 = arr(), f0 = arr(), c0 = arr(), e0 = arr();
   let t1 = arr(), f1 = arr(), c1 = arr(), e1 = arr();
   const tg = arr(), fg = arr(), cg = arr(), eg = arr();
-  const k = arr(), dk = arr();
-  const lower = arr(), diag = arr(), upper = arr(), rhs = arr(), delta = arr(), work = arr(), explicit = arr();
+  const lower = arr(), diag = arr(), upper = arr(), rhs = arr(), delta = arr(), explicit = arr();
+  const stageMatrix = createFactoredTridiagonal(n);
   let q0 = 0, qg = 0, q1 = 0;
   let lastStepS = 0;
   // The state before the accepted one and the step between them, for the stage predictor.
@@ -67,66 +72,132 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   // One interval means constant properties: e is linear in T and no capacity peak can be stepped over.
   const capacityVaries = table.intervals > 1;
 
-  /** F, C, e and the Jacobian V C - a dF/dT at T into (f, c, e, lower/diag/upper); returns the surface flux. */
-  function evaluate(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number): number {
-    evaluateMaterial(table, t, n, k, dk, c, e);
+  const { lowK: tableLowK, stepK: tableStepK, intervals, conductivityWPerMK: kt, heatCapacityJPerM3K: ct, enthalpyJPerM3: et, conductivitySlopeWPerMK2: kSlope, heatCapacitySlopeJPerM3K2: cSlope } = table;
+  const tableInvStep = 1 / tableStepK;
+  const tableHighK = tableLowK + intervals * tableStepK;
+  const invVol = arr();
+  for (let i = 0; i < n; i++) invVol[i] = 1 / vol[i];
+  /** Set by `evaluate` when asked for the residual: true when some node is not converged (or not finite). */
+  let unconverged = false;
+
+  /**
+   * F, C, e and the Jacobian V C - a dF/dT at T into (f, c, e, lower/diag/upper), in one pass over the nodes
+   * (each node's k, dk/dT, C, e looked up once on the uniform table). With `residual`, also the Newton residual
+   * explicit + a F - V e into rhs and the convergence flag `unconverged`. Returns the surface flux.
+   */
+  function evaluate(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number, residual: boolean, tolK: number): number {
     let inflowFromLeft = 0;
     // Derivatives of the previous face flow: P = d(phi)/dT_left, Q = d(phi)/dT_right.
     let dLeftPrev = 0;
     let dRightPrev = 0;
-    for (let j = 0; j < n - 1; j++) {
-      const ka = k[j], kb = k[j + 1];
-      const inv = 1 / (ka + kb);
-      const kf = 2 * ka * kb * inv;
-      const g = geo[j];
-      const gdt = g * (t[j] - t[j + 1]);
-      const phi = gdt * kf;
-      // d(kf)/d(ka) = 2 kb² / (ka + kb)², d(kf)/d(kb) = 2 ka² / (ka + kb)².
-      const p = g * kf + gdt * 2 * kb * kb * inv * inv * dk[j];
-      const q = -g * kf + gdt * 2 * ka * ka * inv * inv * dk[j + 1];
-      f[j] = inflowFromLeft - phi;
-      diag[j] = vol[j] * c[j] - a * (dRightPrev - p);
-      lower[j] = -a * dLeftPrev;
-      upper[j] = a * q;
-      inflowFromLeft = phi;
-      dLeftPrev = p;
-      dRightPrev = q;
+    let kPrev = 0, dkPrev = 0, tPrevNode = 0;
+    unconverged = false;
+    for (let j = 0; j <= n; j++) {
+      let kj = 0, dkj = 0, tj = 0;
+      if (j < n) {
+        tj = t[j];
+        // Table look-up as evaluateMaterial, inline.
+        if (tj <= tableLowK) {
+          kj = kt[0];
+          c[j] = ct[0];
+          e[j] = ct[0] * (tj - tableLowK);
+        } else if (tj >= tableHighK) {
+          kj = kt[intervals];
+          c[j] = ct[intervals];
+          e[j] = et[intervals] + ct[intervals] * (tj - tableHighK);
+        } else {
+          let m = Math.floor((tj - tableLowK) * tableInvStep);
+          if (m >= intervals) m = intervals - 1;
+          const sK = tj - (tableLowK + m * tableStepK);
+          const slopeC = cSlope[m];
+          dkj = kSlope[m];
+          kj = kt[m] + dkj * sK;
+          c[j] = ct[m] + slopeC * sK;
+          // e = e_m + C_m s + slope s²/2: the exact integral of the linear C on the interval.
+          e[j] = et[m] + sK * (ct[m] + 0.5 * slopeC * sK);
+        }
+      }
+      if (j === 0) {
+        kPrev = kj;
+        dkPrev = dkj;
+        tPrevNode = tj;
+        continue;
+      }
+      // Node i = j - 1 is complete once the face to its right (i, j) is known (for the last node, the surface).
+      const i = j - 1;
+      let fi: number, di: number;
+      if (j < n) {
+        const ka = kPrev, kb = kj;
+        const inv = 1 / (ka + kb);
+        const kf = 2 * ka * kb * inv;
+        const g = geo[i];
+        const gdt = g * (tPrevNode - tj);
+        const phi = gdt * kf;
+        // d(kf)/d(ka) = 2 kb² / (ka + kb)², d(kf)/d(kb) = 2 ka² / (ka + kb)².
+        const inv2 = 2 * gdt * inv * inv;
+        const p = g * kf + inv2 * kb * kb * dkPrev;
+        const q = -g * kf + inv2 * ka * ka * dkj;
+        fi = inflowFromLeft - phi;
+        di = vol[i] * c[i] - a * (dRightPrev - p);
+        upper[i] = a * q;
+        lower[i] = -a * dLeftPrev;
+        inflowFromLeft = phi;
+        dLeftPrev = p;
+        dRightPrev = q;
+        kPrev = kj;
+        dkPrev = dkj;
+        tPrevNode = tj;
+      } else {
+        const qs = boundary.fluxOut(tPrevNode);
+        fi = inflowFromLeft - surfaceArea * qs;
+        di = vol[i] * c[i] - a * (dRightPrev - surfaceArea * boundary.fluxOutDerivative(tPrevNode));
+        lower[i] = -a * dLeftPrev;
+        inflowFromLeft = qs; // reused below as the return value
+      }
+      f[i] = fi;
+      diag[i] = di;
+      if (residual) {
+        const r = explicit[i] + a * fi - vol[i] * e[i];
+        rhs[i] = r;
+        // Scaled by the node's own capacity, not the diagonal: on long steps the conduction terms dominate the
+        // diagonal and would hide a residual that still creates or destroys energy. NaN counts as unconverged.
+        if (!(Math.abs(r) <= tolK * vol[i] * c[i])) unconverged = true;
+      }
     }
-    const last = n - 1;
-    const ts = t[last];
-    const qs = boundary.fluxOut(ts);
-    f[last] = inflowFromLeft - surfaceArea * qs;
-    diag[last] = vol[last] * c[last] - a * (dRightPrev - surfaceArea * boundary.fluxOutDerivative(ts));
-    lower[last] = -a * dLeftPrev;
-    return qs;
+    return inflowFromLeft;
   }
 
   /**
    * Newton for V e(T) - a F(T) = explicit; T holds the guess and gets the solution. Converged when the residual,
-   * divided by the node's heat capacity V C (kelvin of stored energy), is below newtonTolK: F, C, e are then those
-   * of the returned T.
+   * divided by the node's heat capacity V C (kelvin of stored energy), is below newtonTolK. The stage enthalpy is
+   * then set to (explicit + a F) / V, which holds the energy balance exactly whatever the residual; T differs from
+   * e^-1(e) by at most newtonTolK (the enthalpy is the carried quantity, T its Newton inverse).
    */
   function solveStage(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number): number | null {
+    let factored = false;
+    let lastMove = Infinity;
     for (let iter = 0; iter <= MAX_NEWTON_ITERATIONS; iter++) {
-      const qs = evaluate(t, f, c, e, a);
-      let residualK = 0;
-      for (let i = 0; i < n; i++) {
-        const r = explicit[i] + a * f[i] - vol[i] * e[i];
-        rhs[i] = r;
-        // Scaled by the node's own capacity, not the diagonal: on long steps the conduction terms dominate the
-        // diagonal and would hide a residual that still creates or destroys energy.
-        const rk = Math.abs(r) / (vol[i] * c[i]);
-        if (rk > residualK) residualK = rk;
+      const qs = evaluate(t, f, c, e, a, true, newtonTolK);
+      if (!Number.isFinite(qs)) return null;
+      if (!unconverged) {
+        for (let i = 0; i < n; i++) e[i] += rhs[i] * invVol[i];
+        return qs;
       }
-      if (!(residualK < Infinity) || !Number.isFinite(qs)) return null;
-      if (residualK <= newtonTolK) return qs;
       if (iter === MAX_NEWTON_ITERATIONS) break;
-      solveTridiagonal(n, lower, diag, upper, rhs, delta, work);
+      // Simplified Newton: the matrix of the first iterate is kept while the corrections shrink fast enough.
+      if (!factored) {
+        factorTridiagonal(stageMatrix, lower, diag, upper);
+        factored = true;
+      }
+      solveFactoredTridiagonal(stageMatrix, rhs, delta);
       let move = 0;
       for (let i = 0; i < n; i++) {
         const d = Math.abs(delta[i]);
         if (d > move) move = d;
       }
+      if (!(move < Infinity)) return null;
+      if (move > NEWTON_CONTRACTION_MAX * lastMove) factored = false;
+      lastMove = move;
       const scale = move > maxNewtonMoveK ? maxNewtonMoveK / move : 1;
       for (let i = 0; i < n; i++) t[i] += scale * delta[i];
     }
@@ -137,7 +208,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
     for (let i = 0; i < n; i++) {
       const de = eb[i] - ea[i];
       const trapezoid = 0.5 * (ca[i] + cb[i]) * (tb[i] - ta[i]);
-      if (Math.abs(de - trapezoid) > CAPACITY_FEATURE_FRACTION * Math.abs(de) + 1e-12 * Math.abs(ea[i])) return true;
+      if (Math.abs(de - trapezoid) > CAPACITY_FEATURE_FRACTION * Math.abs(de) + 1e-12 * Math.abs(ea[i]) + 2 * newtonTolK * (ca[i] + cb[i])) return true;
     }
     return false;
   }
@@ -153,18 +224,26 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
     setState(temperatureK) {
       t0.set(temperatureK);
       prevStepS = 0;
-      q0 = evaluate(t0, f0, c0, e0, 0);
+      q0 = evaluate(t0, f0, c0, e0, 0, false, 0);
       for (let i = 0; i < n; i++) if (!Number.isFinite(f0[i])) return false;
       return Number.isFinite(q0);
     },
     attempt(h) {
       const a = D * h;
       // Stage 1, trapezoid to t + gamma h: V e_g - d h F_g = V e_0 + d h F_0.
-      // Predictor: the secant through the last two accepted states (the accepted state on the first step).
-      const lean = prevStepS > 0 ? (GAMMA * h) / prevStepS : 0;
+      // Predictor: the quadratic with the accepted value and slope F/(V C) at t that passes through the state
+      // before it (on the first step from a state: the state itself). Polynomial extrapolation of the past solution
+      // as the Newton starting value: Hairer and Wanner, Solving ODEs II, 2nd ed., Sec. IV.8 (from memory).
+      const tau = GAMMA * h;
+      const history = prevStepS > 0;
       for (let i = 0; i < n; i++) {
         explicit[i] = vol[i] * e0[i] + a * f0[i];
-        const guess = t0[i] + lean * (t0[i] - tPrev[i]);
+        let guess = t0[i];
+        if (history) {
+          const slope = (f0[i] * invVol[i]) / c0[i];
+          const curvature = (tPrev[i] - t0[i] + slope * prevStepS) / (prevStepS * prevStepS);
+          guess = t0[i] + tau * (slope + curvature * tau);
+        }
         tg[i] = guess < lowK ? lowK : guess > highK ? highK : guess;
       }
       const qgNew = solveStage(tg, fg, cg, eg, a);
@@ -172,7 +251,14 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       // Stage 2, BDF2 to t + h: V e_1 - d h F_1 = V e_0 + w h (F_0 + F_g).
       for (let i = 0; i < n; i++) {
         explicit[i] = vol[i] * e0[i] + W * h * (f0[i] + fg[i]);
-        const guess = t0[i] + (tg[i] - t0[i]) / GAMMA;
+        // Predictor: the quadratic with the value and slope at t through the first stage (the secant on the
+        // first step from a state, where the slope at t can be that of a sudden start).
+        let guess: number;
+        if (history) {
+          const slope = (f0[i] * invVol[i]) / c0[i];
+          const curvature = (tg[i] - t0[i] - slope * tau) / (tau * tau);
+          guess = t0[i] + h * (slope + curvature * h);
+        } else guess = t0[i] + (tg[i] - t0[i]) / GAMMA;
         t1[i] = guess < lowK ? lowK : guess > highK ? highK : guess;
       }
       const q1New = solveStage(t1, f1, c1, e1, a);
@@ -182,7 +268,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       q1 = q1New;
       // Embedded error, filtered with the Jacobian of the last stage (still in lower/diag/upper).
       for (let i = 0; i < n; i++) rhs[i] = h * (ERR_WEIGHT_START * f0[i] + ERR_WEIGHT_MID * fg[i] + ERR_WEIGHT_END * f1[i]);
-      solveTridiagonal(n, lower, diag, upper, rhs, delta, work);
+      solveFactoredTridiagonal(stageMatrix, rhs, delta);
       let errorK = 0;
       for (let i = 0; i < n; i++) {
         const d = Math.abs(delta[i]);
