@@ -9,7 +9,7 @@ import { ALPHA_M2_PER_S, CONSTANT_K_W_PER_MK, LENGTH_M, convection, problemOf, s
 import type { Shape1D } from './exactSeries1D';
 
 /**
- * Allowed overshoot, K: the temperatures are iterated to a Newton residual of 1e-5 of the local step tolerance, and the Hermite
+ * Allowed overshoot, K: the temperatures are iterated to a Newton residual of 1e-4 of the local step tolerance, and the Hermite
  * samples between steps may overshoot by the local time error (a tenth of the 0.05 K tolerance used here).
  */
 const NODE_SLACK_K = 1e-6;
