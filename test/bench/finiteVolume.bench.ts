@@ -73,6 +73,33 @@ console.log(`  ns per cell-step       ${((auto.ms * 1e6) / auto.cellSteps).toFix
 const mem = process.memoryUsage();
 console.log(`  memory                 rss ${(mem.rss / 2 ** 20).toFixed(1)} MiB, heap used ${(mem.heapUsed / 2 ** 20).toFixed(1)} MiB`);
 
+// Accuracy of the same plan: each stage at the plan tolerance against a 30 times tighter run (the quench for the
+// located duration), largest difference over the 121 samples (self-convergence, as in test/unit/finite-volume).
+{
+  const quenchS = auto.last[1].durationS;
+  const stages = (tol: number) => {
+    toleranceK = tol;
+    const a = solveFiniteVolumeStage(stage(air, { kind: 'uniform', temperatureK: 860 + C }, { kind: 'duration', seconds: 25 }));
+    if (!a.ok) throw new Error(a.message);
+    const b = solveFiniteVolumeStage(stage(water, a.solution.endField, { kind: 'duration', seconds: quenchS }));
+    if (!b.ok) throw new Error(b.message);
+    return [a.solution, b.solution];
+  };
+  const plan = stages(0.01);
+  const reference = stages(0.01 / 30);
+  toleranceK = 0.01;
+  console.log('Accuracy at 0.01 K against a 30x tighter run (largest difference over the samples):');
+  plan.forEach((s, k) => {
+    const parts = (['centre', 'surface', 'mean'] as const).map((pt) => {
+      const x = s.samples.temperaturesK[pt]!, y = reference[k].samples.temperaturesK[pt]!;
+      let worst = 0, at = 0;
+      for (let i = 0; i < x.length; i++) if (Math.abs(x[i] - y[i]) > worst) [worst, at] = [Math.abs(x[i] - y[i]), i];
+      return `${pt} ${worst.toFixed(4)} K at ${s.samples.timeS[at].toFixed(1)} s`;
+    });
+    console.log(`  stage ${k + 1} (${s.effort.steps} vs ${reference[k].effort.steps} steps): ${parts.join(', ')}`);
+  });
+}
+
 console.log('Scaling with the cell count (fixed grids: coarse cells, the fine grid twice as many; same time tolerance):');
 const quenchEnd = auto.last[1].endField;
 const base = quenchEnd.kind === 'grid-1d' ? (quenchEnd.nodesM.length - 1) / 2 : 0;
