@@ -63,6 +63,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   const tg = arr(), fg = arr(), cg = arr(), eg = arr();
   const lower = arr(), diag = arr(), upper = arr(), rhs = arr(), delta = arr(), explicit = arr();
   const stageMatrix = createFactoredTridiagonal(n);
+  const scratchF = arr(), scratchC = arr(), scratchE = arr();
   let q0 = 0, qg = 0, q1 = 0;
   let lastStepS = 0;
   // The state before the accepted one and the step between them, for the stage predictor.
@@ -79,13 +80,15 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   for (let i = 0; i < n; i++) invVol[i] = 1 / vol[i];
   /** Set by `evaluate` when asked for the residual: true when some node is not converged (or not finite). */
   let unconverged = false;
+  /** Set by `solveStage`: whether the stage factorised its matrix (else stageMatrix belongs to an earlier stage). */
+  let stageFactored = false;
 
   /**
-   * F, C, e and the Jacobian V C - a dF/dT at T into (f, c, e, lower/diag/upper), in one pass over the nodes
-   * (each node's k, dk/dT, C, e looked up once on the uniform table). With `residual`, also the Newton residual
+   * F, C, e and (with `jacobian`) the matrix V C - a dF/dT at T into (f, c, e, lower/diag/upper), in one pass over
+   * the nodes (each node's k, dk/dT, C, e looked up once on the uniform table). With `residual`, also the Newton residual
    * explicit + a F - V e into rhs and the convergence flag `unconverged`. Returns the surface flux.
    */
-  function evaluate(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number, residual: boolean, tolK: number): number {
+  function evaluate(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number, jacobian: boolean, residual: boolean, tolK: number): number {
     let inflowFromLeft = 0;
     // Derivatives of the previous face flow: P = d(phi)/dT_left, Q = d(phi)/dT_right.
     let dLeftPrev = 0;
@@ -125,7 +128,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       }
       // Node i = j - 1 is complete once the face to its right (i, j) is known (for the last node, the surface).
       const i = j - 1;
-      let fi: number, di: number;
+      let fi: number;
       if (j < n) {
         const ka = kPrev, kb = kj;
         const inv = 1 / (ka + kb);
@@ -133,29 +136,32 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
         const g = geo[i];
         const gdt = g * (tPrevNode - tj);
         const phi = gdt * kf;
-        // d(kf)/d(ka) = 2 kb² / (ka + kb)², d(kf)/d(kb) = 2 ka² / (ka + kb)².
-        const inv2 = 2 * gdt * inv * inv;
-        const p = g * kf + inv2 * kb * kb * dkPrev;
-        const q = -g * kf + inv2 * ka * ka * dkj;
         fi = inflowFromLeft - phi;
-        di = vol[i] * c[i] - a * (dRightPrev - p);
-        upper[i] = a * q;
-        lower[i] = -a * dLeftPrev;
         inflowFromLeft = phi;
-        dLeftPrev = p;
-        dRightPrev = q;
+        if (jacobian) {
+          // d(kf)/d(ka) = 2 kb² / (ka + kb)², d(kf)/d(kb) = 2 ka² / (ka + kb)².
+          const inv2 = 2 * gdt * inv * inv;
+          const p = g * kf + inv2 * kb * kb * dkPrev;
+          const q = -g * kf + inv2 * ka * ka * dkj;
+          diag[i] = vol[i] * c[i] - a * (dRightPrev - p);
+          upper[i] = a * q;
+          lower[i] = -a * dLeftPrev;
+          dLeftPrev = p;
+          dRightPrev = q;
+        }
         kPrev = kj;
         dkPrev = dkj;
         tPrevNode = tj;
       } else {
         const qs = boundary.fluxOut(tPrevNode);
         fi = inflowFromLeft - surfaceArea * qs;
-        di = vol[i] * c[i] - a * (dRightPrev - surfaceArea * boundary.fluxOutDerivative(tPrevNode));
-        lower[i] = -a * dLeftPrev;
+        if (jacobian) {
+          diag[i] = vol[i] * c[i] - a * (dRightPrev - surfaceArea * boundary.fluxOutDerivative(tPrevNode));
+          lower[i] = -a * dLeftPrev;
+        }
         inflowFromLeft = qs; // reused below as the return value
       }
       f[i] = fi;
-      diag[i] = di;
       if (residual) {
         const r = explicit[i] + a * fi - vol[i] * e[i];
         rhs[i] = r;
@@ -175,9 +181,10 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
    */
   function solveStage(t: Float64Array, f: Float64Array, c: Float64Array, e: Float64Array, a: number): number | null {
     let factored = false;
+    stageFactored = false;
     let lastMove = Infinity;
     for (let iter = 0; iter <= MAX_NEWTON_ITERATIONS; iter++) {
-      const qs = evaluate(t, f, c, e, a, true, newtonTolK);
+      const qs = evaluate(t, f, c, e, a, !factored, true, newtonTolK);
       if (!Number.isFinite(qs)) return null;
       if (!unconverged) {
         for (let i = 0; i < n; i++) e[i] += rhs[i] * invVol[i];
@@ -188,6 +195,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       if (!factored) {
         factorTridiagonal(stageMatrix, lower, diag, upper);
         factored = true;
+        stageFactored = true;
       }
       solveFactoredTridiagonal(stageMatrix, rhs, delta);
       let move = 0;
@@ -224,7 +232,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
     setState(temperatureK) {
       t0.set(temperatureK);
       prevStepS = 0;
-      q0 = evaluate(t0, f0, c0, e0, 0, false, 0);
+      q0 = evaluate(t0, f0, c0, e0, 0, false, false, 0);
       for (let i = 0; i < n; i++) if (!Number.isFinite(f0[i])) return false;
       return Number.isFinite(q0);
     },
@@ -266,8 +274,12 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       if (capacityVaries && (peakSkipped(t0, c0, e0, tg, cg, eg) || peakSkipped(tg, cg, eg, t1, c1, e1))) return { ok: false, reason: 'capacity-peak' };
       qg = qgNew;
       q1 = q1New;
-      // Embedded error, filtered with the Jacobian of the last stage (still in lower/diag/upper).
+      // Embedded error, filtered with the matrix of the last stage (formed here if its predictor needed no Newton step).
       for (let i = 0; i < n; i++) rhs[i] = h * (ERR_WEIGHT_START * f0[i] + ERR_WEIGHT_MID * fg[i] + ERR_WEIGHT_END * f1[i]);
+      if (!stageFactored) {
+        evaluate(t1, scratchF, scratchC, scratchE, a, true, false, 0);
+        factorTridiagonal(stageMatrix, lower, diag, upper);
+      }
       solveFactoredTridiagonal(stageMatrix, rhs, delta);
       let errorK = 0;
       for (let i = 0; i < n; i++) {
