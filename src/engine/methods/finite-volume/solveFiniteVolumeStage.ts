@@ -7,12 +7,14 @@
 // Validity: any Bi, any start field of the shape (uniform, exact series, sampled grid), heating or cooling.
 // Convergence rule: the grids are sized from Bi and toleranceK / (temperature span) (sizeGrid, then a
 // COARSE_REDUCTION share of it for the coarse grid, twice that for the fine one); steps are accepted when the filtered
-// local error of both grids is below TIME_TOLERANCE_FRACTION x toleranceK.
+// local error of both grids is below TIME_TOLERANCE_FRACTION x toleranceK (a smaller share, and less again in
+// transition boiling, where the boundary has a falling-flux range).
 // Expected error: reported temperatures within toleranceK of the exact answer (checked against the exact series
 // in test/unit/finite-volume); energy balance to the Newton tolerance (relative error well below 1e-6).
 import type { StageOutcome, StageProblem, StageSolution } from '../stageProblem';
 import type { Field1D } from '../../fields';
 import type { PointId } from '@/schema/planSchema';
+import type { SurfaceBoundary } from '../../properties/surfaceBoundary';
 import { buildVolumeGrid, gridOnNodes, areaExponentOf, type VolumeGrid } from './buildVolumeGrid';
 import { tabulateMaterial } from './tabulateMaterial';
 import { createTrBdf2Stepper } from './trBdf2Stepper';
@@ -24,13 +26,17 @@ import { equilibriumTemperature } from './equilibriumTemperature';
 import { temperatureAt } from '../series/evaluateField1D';
 import { KELVIN_OFFSET } from '@/schema/planTemperatures';
 
+/** Share of the tolerance given to the local time error of one step (the rest to space and accumulation). Common practice. */
+const TIME_TOLERANCE_FRACTION = 0.1;
 /**
- * Share of the tolerance given to the local time error of one step (the rest to space and accumulation). Common
- * practice for the size; set to 0.03 from the demo water quench, where a local error made before the film collapse is
- * carried through it as a time shift of a curve falling at hundreds of K/s (0.1 left 0.039 K against a 30 times
- * tighter run, 0.03 with the transition rule below leaves 0.007 K).
+ * The share for a stage whose boundary has a falling-flux range (transition boiling) between the temperatures the
+ * stage can reach: a local error made before the film collapse is carried through it as a time shift of a curve
+ * falling at hundreds of K/s. Set from the demo water quench: 0.1 left 0.039 K against a 30 times tighter run,
+ * 0.03 with the transition rule below leaves 0.007 K. A rule of this solver.
  */
-const TIME_TOLERANCE_FRACTION = 0.03;
+const TIME_TOLERANCE_FRACTION_FALLING_FLUX = 0.03;
+/** Surface temperatures at which a boundary is scanned for a falling flux (besides its h-table rows). */
+const FLUX_SCAN_POINTS = 64;
 /**
  * Where the surface flux falls as the surface temperature rises (transition boiling: d(fluxOut)/dTs < 0) small
  * errors grow instead of dying out, the faster the steeper the fall. Steps there use the local tolerance divided by
@@ -101,6 +107,19 @@ function atLeastAsFine(nodes: Float64Array, needed: Float64Array): boolean {
   return nodes.length >= 2 && widest(nodes) <= widest(needed) * (1 + 1e-9) && surface(nodes) <= surface(needed) * (1 + 1e-9);
 }
 
+/**
+ * Whether d(fluxOut)/dTs < 0 somewhere between lowK and highK: checked at FLUX_SCAN_POINTS even temperatures and
+ * on both sides of every h-table row inside the range (the flux is piecewise smooth between rows).
+ */
+function hasFallingFlux(boundary: SurfaceBoundary, lowK: number, highK: number): boolean {
+  const at: number[] = [];
+  for (let i = 0; i <= FLUX_SCAN_POINTS; i++) at.push(lowK + ((highK - lowK) * i) / FLUX_SCAN_POINTS);
+  const rows = (boundary.hBreakpointsK ?? []).filter((b) => b > lowK && b < highK);
+  const sides = [lowK, ...rows, highK];
+  for (let i = 0; i + 1 < sides.length; i++) at.push(0.5 * (sides[i] + sides[i + 1]));
+  return at.some((t) => boundary.fluxOutDerivative(t) < 0);
+}
+
 const kelvin = (t: number) => `${t.toFixed(2)} K (${(t - KELVIN_OFFSET).toFixed(2)} °C)`;
 
 export function solveFiniteVolumeStage(problem: StageProblem): StageOutcome {
@@ -163,8 +182,9 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
   const fineGrid = reuse ? gridOnNodes(oneD.geometry, lengthM, start.nodesM.slice(), geometry.volumeM3) : sizedFine;
   const coarseGrid = extrapolate ? gridOnNodes(oneD.geometry, lengthM, fineGrid.nodesM.filter((_, i) => i % 2 === 0), geometry.volumeM3) : null;
 
+  const timeShare = hasFallingFlux(boundary, reachLowK, reachHighK) ? TIME_TOLERANCE_FRACTION_FALLING_FLUX : TIME_TOLERANCE_FRACTION;
   const member = (grid: VolumeGrid): GridMember | null => {
-    const stepper = createTrBdf2Stepper(grid, table, boundary, lowK, highK, NEWTON_TOLERANCE_FRACTION * TIME_TOLERANCE_FRACTION * toleranceK);
+    const stepper = createTrBdf2Stepper(grid, table, boundary, lowK, highK, NEWTON_TOLERANCE_FRACTION * timeShare * toleranceK);
     const initialK = new Float64Array(grid.nodeCount);
     for (let i = 0; i < grid.nodeCount; i++) initialK[i] = start.kind === 'uniform' ? start.temperatureK : temperatureAt(start, grid.nodesM[i]);
     return stepper.setState(initialK) ? { grid, stepper } : null;
@@ -213,7 +233,7 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
   const capacityMid = material.volumetricHeatCapacity(0.5 * (reachLowK + reachHighK));
   const kMid = material.conductivity.at(0.5 * (reachLowK + reachHighK));
   const surfaceSpacing = fineGrid.nodesM[n - 1] - fineGrid.nodesM[n - 2];
-  const localTolK = TIME_TOLERANCE_FRACTION * toleranceK;
+  const localTolK = timeShare * toleranceK;
   const durationS = end.kind === 'duration' ? end.seconds : Infinity;
   const m = areaExponentOf(oneD.geometry);
   const hEq = Math.max(boundary.fluxOutDerivative(equilibriumK), 1e-12);
