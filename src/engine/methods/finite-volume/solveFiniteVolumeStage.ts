@@ -32,8 +32,9 @@ import { KELVIN_OFFSET } from '@/schema/planTemperatures';
 const TIME_TOLERANCE_FRACTION = 0.1;
 /**
  * The share for a stage whose boundary has a falling-flux range (transition boiling) between the temperatures the
- * stage can reach: a local error made before the film collapse is carried through it as a time shift of a curve
- * falling at hundreds of K/s. Set from the demo water quench: 0.1 left 0.039 K against a 30 times tighter run,
+ * stage can reach, while the surface has that range still ahead (once past it, TIME_TOLERANCE_FRACTION again):
+ * a local error made before the film collapse is carried through it as a time shift of a curve falling at hundreds
+ * of K/s. Set from the demo water quench: 0.1 left 0.039 K against a 30 times tighter run,
  * 0.03 with the transition rule below leaves 0.007 K. A rule of this solver.
  */
 const TIME_TOLERANCE_FRACTION_FALLING_FLUX = 0.03;
@@ -110,16 +111,18 @@ function atLeastAsFine(nodes: Float64Array, needed: Float64Array): boolean {
 }
 
 /**
- * Whether d(fluxOut)/dTs < 0 somewhere between lowK and highK: checked at FLUX_SCAN_POINTS even temperatures and
- * on both sides of every h-table row inside the range (the flux is piecewise smooth between rows).
+ * The span of surface temperatures between lowK and highK where d(fluxOut)/dTs < 0, or null: checked at
+ * FLUX_SCAN_POINTS even temperatures and on both sides of every h-table row inside the range (the flux is
+ * piecewise smooth between rows).
  */
-function hasFallingFlux(boundary: SurfaceBoundary, lowK: number, highK: number): boolean {
+function fallingFluxSpan(boundary: SurfaceBoundary, lowK: number, highK: number): { lowK: number; highK: number } | null {
   const at: number[] = [];
   for (let i = 0; i <= FLUX_SCAN_POINTS; i++) at.push(lowK + ((highK - lowK) * i) / FLUX_SCAN_POINTS);
   const rows = (boundary.hBreakpointsK ?? []).filter((b) => b > lowK && b < highK);
   const sides = [lowK, ...rows, highK];
   for (let i = 0; i + 1 < sides.length; i++) at.push(0.5 * (sides[i] + sides[i + 1]));
-  return at.some((t) => boundary.fluxOutDerivative(t) < 0);
+  const falling = at.filter((t) => boundary.fluxOutDerivative(t) < 0);
+  return falling.length > 0 ? { lowK: Math.min(...falling), highK: Math.max(...falling) } : null;
 }
 
 const kelvin = (t: number) => `${t.toFixed(2)} K (${(t - KELVIN_OFFSET).toFixed(2)} °C)`;
@@ -184,7 +187,10 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
   const fineGrid = reuse ? gridOnNodes(oneD.geometry, lengthM, start.nodesM.slice(), geometry.volumeM3) : sizedFine;
   const coarseGrid = extrapolate ? gridOnNodes(oneD.geometry, lengthM, fineGrid.nodesM.filter((_, i) => i % 2 === 0), geometry.volumeM3) : null;
 
-  const timeShare = hasFallingFlux(boundary, reachLowK, reachHighK) ? TIME_TOLERANCE_FRACTION_FALLING_FLUX : TIME_TOLERANCE_FRACTION;
+  const falling = fallingFluxSpan(boundary, reachLowK, reachHighK);
+  const timeShare = falling ? TIME_TOLERANCE_FRACTION_FALLING_FLUX : TIME_TOLERANCE_FRACTION;
+  /** Whether the surface at ts still has the falling-flux range ahead of it (between it and the equilibrium). */
+  const collapseAhead = (ts: number) => falling !== null && (ts > equilibriumK ? ts > falling.lowK : ts < falling.highK);
   const member = (grid: VolumeGrid): GridMember | null => {
     const stepper = createTrBdf2Stepper(grid, table, boundary, lowK, highK, NEWTON_TOLERANCE_FRACTION * timeShare * toleranceK);
     const initialK = new Float64Array(grid.nodeCount);
@@ -236,6 +242,7 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
   const kMid = material.conductivity.at(0.5 * (reachLowK + reachHighK));
   const surfaceSpacing = fineGrid.nodesM[n - 1] - fineGrid.nodesM[n - 2];
   const localTolK = timeShare * toleranceK;
+  const pastCollapseTolK = TIME_TOLERANCE_FRACTION * toleranceK;
   const durationS = end.kind === 'duration' ? end.seconds : Infinity;
   const m = areaExponentOf(oneD.geometry);
   const hEq = Math.max(boundary.fluxOutDerivative(equilibriumK), 1e-12);
@@ -266,7 +273,9 @@ export function solveFiniteVolumeStageWith(problem: StageProblem, overrides: Fin
     }
     const slopeMin = Math.min(boundary.fluxOutDerivative(fineStepper.temperatureK[n - 1]), boundary.fluxOutDerivative(fineStepper.trialTemperatureK[n - 1]));
     const unstable = slopeMin < 0;
-    const stepTolK = unstable ? localTolK / (1 + (TRANSITION_TOLERANCE_GAIN * -slopeMin * lengthM) / kMid) : localTolK;
+    const stepTolK = unstable
+      ? localTolK / (1 + (TRANSITION_TOLERANCE_GAIN * -slopeMin * lengthM) / kMid)
+      : collapseAhead(fineStepper.trialTemperatureK[n - 1]) ? localTolK : pastCollapseTolK;
     const ratio = attempt.errorK > 0 ? stepTolK / attempt.errorK : Infinity;
     if (overrides.fixedStepS === undefined && ratio < 1) {
       stepS = h * Math.max(STEP_SHRINK_MIN, STEP_SAFETY * Math.cbrt(ratio));
