@@ -8,7 +8,8 @@ import { join } from 'node:path';
 const run = (...args: string[]) => spawnSync('npx', ['tsx', 'src/cli/plan.ts', ...args], { encoding: 'utf8' });
 const dir = mkdtempSync(join(tmpdir(), 'coolstage-cli-'));
 
-describe('npm run plan', () => {
+// Each case starts a Node process and runs whole plans with cross-checks: seconds, not milliseconds.
+describe('npm run plan', { timeout: 30_000 }, () => {
   it('prints per-stage method, both Biot numbers, Fo, duration and warnings as JSON for the demo plan', () => {
     const r = run('src/library/plans/demo-plan.json', '--json');
     expect(r.status, r.stderr).toBe(0);
