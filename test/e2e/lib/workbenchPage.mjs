@@ -40,3 +40,17 @@ export async function stageDurationText(page, index) {
 export function assert(condition, message) {
   if (!condition) throw new Error(message);
 }
+
+/**
+ * Wait until an input shows the expected text. A field rewrites its text in an effect after the store
+ * changes, one frame after the key press, so reading it at once races the render.
+ */
+export async function waitForInputValue(locator, expected, message, timeoutMs = 3000) {
+  const until = Date.now() + timeoutMs;
+  let value = await locator.inputValue();
+  while (value !== expected && Date.now() < until) {
+    await new Promise((r) => setTimeout(r, 25));
+    value = await locator.inputValue();
+  }
+  assert(value === expected, `${message} (shows ${JSON.stringify(value)}, expected ${JSON.stringify(expected)})`);
+}

@@ -1,5 +1,5 @@
 // Reload and find the plan still there; undo an edit with the keyboard and the button.
-import { assert, openCleanWorkbench, waitForChart, waitForResults } from '../lib/workbenchPage.mjs';
+import { assert, openCleanWorkbench, waitForChart, waitForInputValue, waitForResults } from '../lib/workbenchPage.mjs';
 
 export const name = 'reload keeps the plan; undo takes an edit back';
 
@@ -20,12 +20,13 @@ export async function run({ page, baseUrl, shot }) {
   // Undo history is per session; make an edit, then take it back with Ctrl+Z.
   await page.getByLabel('Diameter (mm)').fill('60');
   await page.locator('body').click({ position: { x: 5, y: 5 } });
+  const diameterField = page.getByLabel('Diameter (mm)');
   await page.keyboard.press('Control+z');
-  assert((await page.getByLabel('Diameter (mm)').inputValue()) === '55', `Ctrl+Z did not undo the diameter: ${await page.getByLabel('Diameter (mm)').inputValue()}`);
+  await waitForInputValue(diameterField, '55', 'Ctrl+Z did not undo the diameter');
   await page.keyboard.press('Control+Shift+z');
-  assert((await page.getByLabel('Diameter (mm)').inputValue()) === '60', 'Ctrl+Shift+Z did not redo');
+  await waitForInputValue(diameterField, '60', 'Ctrl+Shift+Z did not redo');
   await page.getByRole('button', { name: '↶ Undo' }).click();
-  assert((await page.getByLabel('Diameter (mm)').inputValue()) === '55', 'the Undo button did not undo');
+  await waitForInputValue(diameterField, '55', 'the Undo button did not undo');
   await page.reload();
   await waitForResults(page);
   assert((await page.getByLabel('Diameter (mm)').inputValue()) === '55', 'the undone state was not what reload brought back');
