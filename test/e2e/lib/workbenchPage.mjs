@@ -42,15 +42,18 @@ export function assert(condition, message) {
 }
 
 /**
- * Wait until an input shows the expected text. A field rewrites its text in an effect after the store
- * changes, one frame after the key press, so reading it at once races the render.
+ * Wait until a field's text passes a check. A field rewrites its text in an effect after the store
+ * (or the unit system) changes, a frame after the key press, so reading it at once races the render.
  */
-export async function waitForInputValue(locator, expected, message, timeoutMs = 3000) {
+export async function waitForInput(locator, check, message, timeoutMs = 3000) {
   const until = Date.now() + timeoutMs;
   let value = await locator.inputValue();
-  while (value !== expected && Date.now() < until) {
+  while (!check(value) && Date.now() < until) {
     await new Promise((r) => setTimeout(r, 25));
     value = await locator.inputValue();
   }
-  assert(value === expected, `${message} (shows ${JSON.stringify(value)}, expected ${JSON.stringify(expected)})`);
+  assert(check(value), `${message} (the field shows ${JSON.stringify(value)})`);
+  return value;
 }
+
+export const waitForInputValue = (locator, expected, message) => waitForInput(locator, (v) => v === expected, `${message}; expected ${JSON.stringify(expected)}`);

@@ -1,5 +1,5 @@
 // Switch units without changing the plan; every control of the first screen is reachable by Tab.
-import { assert, openCleanWorkbench, waitForResults } from '../lib/workbenchPage.mjs';
+import { assert, openCleanWorkbench, waitForInput, waitForInputValue, waitForResults } from '../lib/workbenchPage.mjs';
 
 export const name = 'unit switch keeps the plan; controls have names';
 
@@ -7,11 +7,10 @@ export async function run({ page, baseUrl, shot }) {
   await openCleanWorkbench(page, baseUrl);
   const diameterMm = Number(await page.getByLabel('Diameter (mm)').inputValue());
   await page.getByRole('radio', { name: 'US' }).check();
-  const diameterIn = Number(await page.getByLabel('Diameter (in)').inputValue());
   // 1 in = 25.4 mm exactly (NIST SP 811, 2008 ed., Appendix B.8, from memory); the field shows 6 significant digits.
-  assert(Math.abs(diameterIn * 25.4 - diameterMm) < 1e-3, `diameter ${diameterMm} mm shown as ${diameterIn} in`);
+  await waitForInput(page.getByLabel('Diameter (in)'), (v) => Math.abs(Number(v) * 25.4 - diameterMm) < 1e-3, `diameter ${diameterMm} mm not shown in inches`);
   await page.getByRole('radio', { name: 'SI' }).check();
-  assert(Number(await page.getByLabel('Diameter (mm)').inputValue()) === diameterMm, 'switching units back changed the diameter');
+  await waitForInputValue(page.getByLabel('Diameter (mm)'), String(diameterMm), 'switching units back changed the diameter');
   assert(!(await page.getByRole('button', { name: '↶ Undo' }).isEnabled()), 'a unit switch must not be an edit of the plan');
   await waitForResults(page);
   // Every input, select, textarea and button has an accessible name.
