@@ -6,6 +6,7 @@ import type { UnitSystem } from '@/features/units/unitSystem';
 import type { ChartFigure } from '@/features/charts/chartFigure';
 import { temperatureHistoryFigure } from '@/features/charts/temperatureHistoryFigure';
 import { planChartTargets } from '@/features/charts/planChartTargets';
+import { suggestedTimeAxis } from '@/features/charts/suggestedTimeAxis';
 import { MAIN_PLAN_ID } from '@/state/connectEngine';
 import { variantOverlaySeries } from './variantOverlaySeries';
 
@@ -13,5 +14,6 @@ export function planOverlayFigure(document: PlanDocument, results: Record<string
   const main = results[MAIN_PLAN_ID];
   if (!main) return null;
   const extraSeries = variantOverlaySeries(document.variants.map((v) => ({ name: v.name, result: results[v.id] })));
-  return temperatureHistoryFigure(main, { system, targets: planChartTargets(document.main), extraSeries });
+  // Paper has no axis switch: the sheet and the exports take the axis the plan reads best on.
+  return temperatureHistoryFigure(main, { system, targets: planChartTargets(document.main), extraSeries, timeAxis: suggestedTimeAxis(main) });
 }
