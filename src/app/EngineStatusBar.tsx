@@ -16,7 +16,7 @@ export function EngineStatusBar({ onStop, onRecompute }: { onStop: () => void; o
     <div className={`engine-status is-${status}`} role="status" aria-live="polite">
       {status === 'running' && (
         <>
-          <span>{stale ? 'Computing…' : 'Results shown; cross-checking every stage with a second method…'}</span>
+          <span>{stale ? 'Computing…' : 'Quick results shown; solving again to the full tolerance and checking every stage with a second method…'}</span>
           {progress !== null && <progress max={1} value={progress} aria-label="Computation progress" />}
           {progress !== null && <span>{Math.round(progress * 100)} %</span>}
           <button type="button" onClick={onStop}>

@@ -77,5 +77,7 @@ export interface PlanResult {
   totalDurationS: number;
   /** False for a quick pass that skipped the second-method check of each stage (crossCheck null per stage). */
   crossChecked: boolean;
+  /** The tolerance the stages were solved to, K. */
+  toleranceK: number;
   warnings: EngineWarning[];
 }

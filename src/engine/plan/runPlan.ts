@@ -30,9 +30,16 @@ export const LUMPED_ACCURACY_FRACTION = 0.05;
 /** The emissivity assumed for the radiation-left-out check when the material gives none: oxidised steel (common practice). */
 export const DEFAULT_SURFACE_EMISSIVITY = 0.8;
 
+/**
+ * The quick pass that answers an edit at once (then replaced by the full pass) skips the cross-checks
+ * and solves to this looser tolerance, K: far below what a chart shows, about a fifth of the work.
+ */
+export const QUICK_PASS_TOLERANCE_K = 0.1;
+
 export interface RunPlanOptions {
+  /** Defaults to DEFAULT_TOLERANCE_K, or QUICK_PASS_TOLERANCE_K for a quick pass. */
   toleranceK?: number;
-  /** Check every stage by a second method (default). A quick first pass for interactive editing may skip it. */
+  /** Check every stage by a second method (default). false = the quick pass for interactive editing. */
   crossCheck?: boolean;
   signal?: AbortSignal;
   onProgress?: (fraction: number) => void;
@@ -64,7 +71,8 @@ function abortError(): Error {
 }
 
 export function runPlan(plan: PlanK, options: RunPlanOptions = {}): PlanResult {
-  const toleranceK = options.toleranceK ?? DEFAULT_TOLERANCE_K;
+  const crossCheck = options.crossCheck ?? true;
+  const toleranceK = options.toleranceK ?? (crossCheck ? DEFAULT_TOLERANCE_K : QUICK_PASS_TOLERANCE_K);
   const geometry = geometryOf(plan.part.shape);
   const material = materialModel(plan.part.material);
   const stages: StageResult[] = [];
@@ -75,7 +83,7 @@ export function runPlan(plan: PlanK, options: RunPlanOptions = {}): PlanResult {
   for (let index = 0; index < plan.stages.length; index++) {
     if (options.signal?.aborted) throw abortError();
     const stage = plan.stages[index];
-    const outcome = runStage(stage, index, field, timeS, { geometry, material, toleranceK, signal: options.signal, crossCheck: options.crossCheck ?? true, emissivity: plan.part.material.surfaceEmissivity, solvers: geometry.oneD ? SOLVERS_1D : SOLVERS_FINITE });
+    const outcome = runStage(stage, index, field, timeS, { geometry, material, toleranceK, signal: options.signal, crossCheck, emissivity: plan.part.material.surfaceEmissivity, solvers: geometry.oneD ? SOLVERS_1D : SOLVERS_FINITE });
     if (!outcome.ok) {
       if (outcome.aborted) throw abortError();
       failure = { index, name: stage.name, code: outcome.code, message: outcome.message };
@@ -94,7 +102,8 @@ export function runPlan(plan: PlanK, options: RunPlanOptions = {}): PlanResult {
     stages,
     failure,
     totalDurationS: timeS,
-    crossChecked: options.crossCheck ?? true,
+    crossChecked: crossCheck,
+    toleranceK,
     warnings: stages.flatMap((s) => s.warnings),
   };
 }

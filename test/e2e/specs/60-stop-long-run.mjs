@@ -21,7 +21,7 @@ export async function run({ page, baseUrl, shot }) {
   await shot('stopped');
   await page.getByRole('button', { name: 'Compute again' }).click();
   // The quick answer comes back first; the 2-D cross-check can take long, so it is stopped again.
-  await page.getByText(/Results shown; cross-checking|Results up to date/).waitFor({ timeout: 30_000 });
+  await page.getByText(/Quick results shown|Results up to date/).waitFor({ timeout: 30_000 });
   assert(!(await page.getByText(/■ Stopped/).isVisible()), 'still says stopped after Compute again');
   if (await page.getByRole('button', { name: 'Stop' }).isVisible()) await page.getByRole('button', { name: 'Stop' }).click();
   assert(typedMs < 2_000, `typing into a field took ${typedMs} ms while the worker was busy`);

@@ -58,6 +58,7 @@ export const airResult: PlanResult = {
   failure: null,
   totalDurationS: 1820,
   crossChecked: false,
+  toleranceK: 0.1,
   warnings: [],
 };
 

@@ -55,12 +55,19 @@ describe('runPlan chaining', () => {
     expect(one.stages[0].warnings.map((w) => w.ruleId)).not.toContain('cross-check-difference');
   });
 
-  it('gives the same stage results without the cross-check in a quick pass', () => {
-    const quick = runPlan(plate([bath(4000, { kind: 'duration', seconds: 80 })]), { crossCheck: false });
+  it('gives the same stage results without the cross-check at the same tolerance', () => {
+    const quick = runPlan(plate([bath(4000, { kind: 'duration', seconds: 80 })]), { crossCheck: false, toleranceK: 0.01 });
     expect(quick.crossChecked).toBe(false);
     expect(quick.stages[0].crossCheck).toBeNull();
     expect(quick.stages[0].endK).toEqual(one.stages[0].endK);
     expect(one.crossChecked).toBe(true);
+    expect(one.toleranceK).toBe(0.01);
+  });
+
+  it('solves a quick pass to the quick tolerance, within it of the full pass', () => {
+    const quick = runPlan(plate([bath(4000, { kind: 'duration', seconds: 80 })]), { crossCheck: false });
+    expect(quick.toleranceK).toBe(0.1);
+    for (const p of ['centre', 'surface', 'mean'] as const) expect(Math.abs(quick.stages[0].endK[p]! - one.stages[0].endK[p]!)).toBeLessThan(0.1);
   });
 
   it('accounts heat removed as rho c V (mean drop), per m² of face for a plate', () => {
