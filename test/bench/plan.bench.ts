@@ -1,5 +1,6 @@
 // Whole-plan benchmark: runPlan on the demo plan (all three stages, every stage cross-checked)
-// and on its first two stages (air transfer, boiling-curve water quench). Prints figures only.
+// and on its first two stages (air transfer, boiling-curve water quench), and the quick pass the workbench
+// shows first after an edit. Prints figures only.
 import { runPlan } from '@/engine/plan/runPlan';
 import { parsePlan } from '@/schema/parsePlan';
 import demo from '@/library/plans/demo-plan.json';
@@ -26,3 +27,4 @@ const r = runPlan(full);
 console.log(`demo plan: ${r.stages.map((s) => `${s.name} [${s.method}, ${s.effort.steps ?? '-'} steps]`).join('; ')}`);
 measure('demo plan, 3 stages, with cross-checks', () => runPlan(full), 20);
 measure('demo plan, first 2 stages, with cross-checks', () => runPlan(twoStage), 20);
+measure('demo plan, quick pass (0.1 K, no cross-checks)', () => runPlan(full, { crossCheck: false }), 20);
