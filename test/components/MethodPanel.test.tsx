@@ -75,6 +75,13 @@ describe('stageMethodFacts', () => {
     expect(crossCheck?.value).toBe('Exact series: largest difference 2.5 K, OUTSIDE the tolerance of 0.5 K');
   });
 
+  it('does not show a lumped stage as having no centre-surface difference', () => {
+    expect(result.stages[0].method).toBe('lumped');
+    const facts = stageMethodFacts(result.stages[0], result.points, 'si');
+    expect(facts.find((f) => f.id === 'max-spread')?.value).toMatch(/not resolved/);
+    expect(facts.find((f) => f.id === 'max-point-spread')).toBeUndefined();
+  });
+
   it('says when the cross-check was a re-run of the same method at a tenth of the tolerance', () => {
     const stage = { ...result.stages[0], crossCheck: { method: 'finite-volume' as const, refined: true, maxDifferenceK: 0.004, toleranceK: 0.02 } };
     const crossCheck = stageMethodFacts(stage, result.points, 'si').find((f) => f.id === 'cross-check');

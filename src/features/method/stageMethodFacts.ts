@@ -88,8 +88,12 @@ export function stageMethodFacts(stage: StageResult, points: PlanResult['points'
         : 'not reported for this method',
     },
     { id: 'max-rate', term: 'Largest surface cooling rate', value: formatQuantity('coolingRate', stage.maxSurfaceCoolingRateKPerS, system) },
-    { id: 'max-spread', term: 'Largest centre–surface difference', value: difference(stage.maxCentreSurfaceDifferenceK) },
-    { id: 'max-point-spread', term: 'Largest spread between reported points', value: difference(stage.maxPointSpreadK), detail: 'mean excluded; an indicator of distortion and cracking risk' },
+    ...(stage.method === 'lumped'
+      ? [{ id: 'max-spread', term: 'Largest centre–surface difference', value: 'not resolved: lumped capacitance holds the part at one temperature', detail: 'see the method reason and the cross-check for the spread it leaves out' }]
+      : [
+          { id: 'max-spread', term: 'Largest centre–surface difference', value: difference(stage.maxCentreSurfaceDifferenceK) },
+          { id: 'max-point-spread', term: 'Largest spread between reported points', value: difference(stage.maxPointSpreadK), detail: 'mean excluded; an indicator of distortion and cracking risk' },
+        ]),
     { id: 'effort', term: 'Effort', value: effortText(stage.effort) },
   ];
   return facts;
