@@ -7,18 +7,14 @@
 //     engine worker) before plotly, and everything.
 // Budgets from the workbench issue: p95 < 100 ms (1-D), < 300 ms (2-D); first chart < 1.5 s;
 // < 150 KB gzip before plotly, < 600 KB gzip in all.
-import { spawn } from 'node:child_process';
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { mkdtemp, rm } from 'node:fs/promises';
 import { gzipSync } from 'node:zlib';
-import { tmpdir } from 'node:os';
 import { join, dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { CHROMIUM, openPreviewBrowser } from '../e2e/lib/previewBrowser.mjs';
 
 const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const DIST = process.env.COOLSTAGE_BENCH_DIST ?? join(ROOT, 'dist');
-const CHROMIUM = process.env.COOLSTAGE_CHROMIUM ?? '/usr/bin/chromium';
 const EDIT_COUNT = 50;
 const LOAD_COUNT = 5;
 const EDIT_TIMEOUT_MS = 10_000;
@@ -45,24 +41,8 @@ const sum = (files) => files.reduce((s, f) => ({ raw: s.raw + size(f).raw, gzip:
 const all = sum(assets);
 
 // ---- Browser figures
-/** A port nobody listens on now (other checkouts may run their own servers on the usual ones). */
-function freePort() {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address();
-      probe.close(() => resolve(port));
-    });
-  });
-}
-const PORT = Number(process.env.COOLSTAGE_BENCH_PORT ?? (await freePort()));
-const BASE_URL = `http://127.0.0.1:${PORT}/`;
-const EXPECTED_INDEX = readFileSync(join(DIST, 'index.html'), 'utf8');
-const { chromium } = await import('playwright-core');
-const server = spawn('npx', ['vite', 'preview', '--host', '127.0.0.1', '--port', String(PORT), '--strictPort', '--outDir', DIST], { cwd: ROOT, detached: true, stdio: 'ignore' });
-const profile = await mkdtemp(join(tmpdir(), 'coolstage-bench-'));
-let context;
+let browser;
+let BASE_URL;
 
 const quantile = (xs, q) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -114,23 +94,9 @@ async function measureEdits(page, label) {
 }
 
 try {
-  let up = false;
-  for (let i = 0; i < 100 && !up; i++) {
-    try {
-      const r = await fetch(BASE_URL);
-      up = r.ok && (await r.text()) === EXPECTED_INDEX;
-    } catch {
-      /* starting */
-    }
-    if (!up) await new Promise((r) => setTimeout(r, 150));
-  }
-  if (!up) throw new Error(`vite preview did not serve ${DIST} at ${BASE_URL}`);
-  context = await chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
-    headless: true,
-    viewport: { width: 1280, height: 900 },
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
+  browser = await openPreviewBrowser({ root: ROOT, distDir: DIST, port: process.env.COOLSTAGE_BENCH_PORT ? Number(process.env.COOLSTAGE_BENCH_PORT) : undefined });
+  BASE_URL = browser.baseUrl;
+  const context = browser.context;
   const page = await context.newPage();
   await page.addInitScript(MEASURE_EDIT);
 
@@ -181,11 +147,5 @@ try {
   line('JS in all (raw / gzip)', `${kb(all.raw)} / ${kb(all.gzip)}`, `${BUDGET.allGzipKB} KB gz`, all.gzip < BUDGET.allGzipKB * KB);
   console.log(`\nfetched by a cold load, besides plotly: ${beforePlotlyFiles.join(', ')}\nplotly, loaded lazily: ${firstLoadJs.filter(isPlotly).join(', ') || '(not fetched)'}`);
 } finally {
-  await context?.close().catch(() => {});
-  try {
-    process.kill(-server.pid, 'SIGTERM');
-  } catch {
-    /* gone */
-  }
-  await rm(profile, { recursive: true, force: true }).catch(() => {});
+  await browser?.close();
 }

@@ -6,21 +6,16 @@
 // Without Chromium: a plain message and exit 0, or exit 1 when COOLSTAGE_REQUIRE_BROWSER=1.
 //   COOLSTAGE_E2E_ONLY=<part of a spec name>   run only matching specs
 //   COOLSTAGE_E2E_DIST=<dir>                   serve another build output directory
-import { spawn } from 'node:child_process';
-import { existsSync, readFileSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { mkdir, mkdtemp, readdir, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { existsSync } from 'node:fs';
+import { mkdir, readdir } from 'node:fs/promises';
 import { join, dirname } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import { CHROMIUM, openPreviewBrowser } from './lib/previewBrowser.mjs';
 
 const HERE = dirname(fileURLToPath(import.meta.url));
 const ROOT = join(HERE, '..', '..');
 const OUT = join(HERE, 'out');
-const CHROMIUM = process.env.COOLSTAGE_CHROMIUM ?? '/usr/bin/chromium';
-const SERVER_START_TIMEOUT_MS = 20_000;
 const SPEC_TIMEOUT_MS = 60_000;
-const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 
 if (!existsSync(CHROMIUM)) {
   const msg = `e2e: Chromium not found at ${CHROMIUM} (Debian: apt-get install chromium).`;
@@ -35,51 +30,6 @@ const distDir = process.env.COOLSTAGE_E2E_DIST ?? join(ROOT, 'dist');
 if (!existsSync(join(distDir, 'index.html'))) {
   console.error(`e2e: no build at ${distDir}; run \`npx vite build\` first (npm test does).`);
   process.exit(1);
-}
-
-const { chromium } = await import('playwright-core');
-
-/** A port nobody listens on now (other checkouts may run their own servers on the usual ones). */
-function freePort() {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address();
-      probe.close(() => resolve(port));
-    });
-  });
-}
-const PORT = Number(process.env.COOLSTAGE_E2E_PORT ?? (await freePort()));
-const BASE_URL = `http://127.0.0.1:${PORT}/`;
-const EXPECTED_INDEX = readFileSync(join(distDir, 'index.html'), 'utf8');
-
-function startServer() {
-  const child = spawn('npx', ['vite', 'preview', '--host', '127.0.0.1', '--port', String(PORT), '--strictPort', '--outDir', distDir], {
-    cwd: ROOT,
-    detached: true,
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let log = '';
-  child.stdout.on('data', (d) => (log += d));
-  child.stderr.on('data', (d) => (log += d));
-  return { child, log: () => log };
-}
-
-async function waitForServer(server) {
-  const until = Date.now() + SERVER_START_TIMEOUT_MS;
-  while (Date.now() < until) {
-    if (server.child.exitCode !== null) throw new Error(`vite preview exited early:\n${server.log()}`);
-    try {
-      const r = await fetch(BASE_URL);
-      // Our own build, not another server that happens to hold the port.
-      if (r.ok && (await r.text()) === EXPECTED_INDEX) return;
-    } catch {
-      /* not up yet */
-    }
-    await new Promise((r) => setTimeout(r, 150));
-  }
-  throw new Error(`vite preview did not answer at ${BASE_URL} within ${SERVER_START_TIMEOUT_MS} ms:\n${server.log()}`);
 }
 
 function withTimeout(promise, ms, what) {
@@ -97,14 +47,12 @@ for (const f of specFiles) {
 }
 
 await mkdir(OUT, { recursive: true });
-const server = startServer();
-const profile = await mkdtemp(join(tmpdir(), 'coolstage-e2e-'));
 let passed = 0;
 let failed = 0;
-let context;
+let browser;
 try {
-  await waitForServer(server);
-  context = await chromium.launchPersistentContext(profile, { executablePath: CHROMIUM, headless: true, args: CHROMIUM_ARGS, viewport: { width: 1280, height: 900 } });
+  browser = await openPreviewBrowser({ root: ROOT, distDir, port: process.env.COOLSTAGE_E2E_PORT ? Number(process.env.COOLSTAGE_E2E_PORT) : undefined });
+  const { context, baseUrl } = browser;
   for (const spec of specs) {
     const page = await context.newPage();
     const problems = [];
@@ -120,7 +68,7 @@ try {
     };
     const started = Date.now();
     try {
-      await withTimeout(spec.run({ page, baseUrl: BASE_URL, shot, context }), SPEC_TIMEOUT_MS, spec.name);
+      await withTimeout(spec.run({ page, baseUrl, shot, context }), SPEC_TIMEOUT_MS, spec.name);
       if (problems.length) throw new Error(problems.join('\n'));
       passed++;
       console.log(`  ✔ ${spec.name} (${Date.now() - started} ms)`);
@@ -137,13 +85,7 @@ try {
   failed++;
   console.log(`  ✖ harness: ${e?.stack ?? e}`);
 } finally {
-  await context?.close().catch(() => {});
-  try {
-    process.kill(-server.child.pid, 'SIGTERM');
-  } catch {
-    /* already gone */
-  }
-  await rm(profile, { recursive: true, force: true }).catch(() => {});
+  await browser?.close();
 }
 console.log(`e2e: ${passed} passed, ${failed} failed`);
 process.exit(failed === 0 && passed > 0 ? 0 : 1);
