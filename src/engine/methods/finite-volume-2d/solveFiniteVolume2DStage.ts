@@ -13,9 +13,9 @@
 // equations; samples are cubic Hermite between steps (resampleHermite), so duration and point-temperature ends
 // take the same steps and give the same samples. Point-temperature ends are located inside the step by Brent's
 // method on the step length (numerics/findRootBracketed).
-// Grid: DEFAULT_NODES_2D / DEFAULT_NODES_3D nodes per axis at toleranceK >= 0.01 K; below that cells and
-// steps are refined together as 1/sqrt(toleranceK), up to 2x (2-D) or 1.5x (3-D), so a re-run at a tenth
-// of the tolerance is a grid-refinement check. Nodes are clustered towards the faces by DEFAULT_STRETCH
+// Grid: DEFAULT_NODES_2D / DEFAULT_NODES_3D nodes per axis at toleranceK = 0.01 K; cells and steps follow
+// 1/sqrt(toleranceK), up to 2x (2-D) or 1.5x (3-D) finer, so a re-run at a tenth of the tolerance is a
+// grid-refinement check, and down to half as fine for the workbench's quick pass at 0.1 K. Nodes are clustered towards the faces by DEFAULT_STRETCH
 // (Vinokur's sinh stretching; face spacing about half the even spacing).
 // Expected error: second order in space and time (test/unit/finite-volume-2d); the time part at toleranceK 0.01 K
 // is 0.15-0.37 K at the faces and 0.04 K at the centre through a water boiling curve (stepControl.test), 0.1-0.2 K
@@ -44,6 +44,8 @@ const DEFAULT_NODES_3D = 21;
 const DEFAULT_GRID_TOLERANCE_K = 0.01;
 const MAX_REFINEMENT_2D = 2;
 const MAX_REFINEMENT_3D = 1.5;
+/** A looser tolerance (the workbench's quick pass at 0.1 K) coarsens cells and steps as 1/sqrt(toleranceK), down to this. */
+const MIN_REFINEMENT = 0.5;
 /** Stretching beta of axisNodes: spacing 2.07 of even at the centre, 0.55 at the faces. */
 const DEFAULT_STRETCH = 2;
 const STEP_TARGET_CHANGE_K = 10;
@@ -80,9 +82,9 @@ export interface FiniteVolume2DOptions {
   localErrorK?: number;
 }
 
-/** How much finer than the defaults the cells and the steps are at this tolerance (1 at 0.01 K and above). */
+/** How much finer than the defaults the cells and the steps are at this tolerance (1 at 0.01 K, below 1 for looser ones). */
 function refinementFor(dims: number, toleranceK: number): number {
-  return Math.min(dims === 2 ? MAX_REFINEMENT_2D : MAX_REFINEMENT_3D, Math.max(1, Math.sqrt(DEFAULT_GRID_TOLERANCE_K / toleranceK)));
+  return Math.min(dims === 2 ? MAX_REFINEMENT_2D : MAX_REFINEMENT_3D, Math.max(MIN_REFINEMENT, Math.sqrt(DEFAULT_GRID_TOLERANCE_K / toleranceK)));
 }
 
 export function finiteVolume2DSolver(options: FiniteVolume2DOptions = {}): StageSolver {
