@@ -2,11 +2,9 @@
 // constant written as a flat two-row table over the temperatures the plan spans. The user supplies
 // the words (description, source) and the emissivity band; parseMaterialEntry checks the result.
 import type { Material, PropertyInput } from '@/schema/planSchema';
-import { KELVIN_OFFSET } from '@/schema/planTemperatures';
+import { kelvinToCelsius as toC } from '@/schema/planTemperatures';
 import { idFromName } from './idFromName';
 
-const tidy = (x: number) => Number(x.toPrecision(12));
-const toC = (k: number) => tidy(k - KELVIN_OFFSET);
 
 export interface MaterialWords {
   name: string;

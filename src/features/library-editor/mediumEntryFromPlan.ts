@@ -2,12 +2,10 @@
 // values (temperatures from kelvin to degC); an h table becomes the entry's boiling curve. The user
 // supplies the words, the bands, and the cautions; parseMediumEntry checks the result.
 import type { Medium } from '@/schema/planSchema';
-import { KELVIN_OFFSET } from '@/schema/planTemperatures';
+import { kelvinToCelsius as toC } from '@/schema/planTemperatures';
 import { DEFER_CAUTION } from '@/library/cautions';
 import { idFromName } from './idFromName';
 
-const tidy = (x: number) => Number(x.toPrecision(12));
-const toC = (k: number) => tidy(k - KELVIN_OFFSET);
 
 export interface MediumWords {
   name: string;

@@ -2,7 +2,7 @@
 // (a boiling curve from the library, or rows typed by the user).
 import type { HeatTransfer } from '@/schema/planSchema';
 import type { BoilingCurve } from '@/library/libraryEntrySchema';
-import { KELVIN_OFFSET } from '@/schema/planTemperatures';
+import { celsiusToKelvin } from '@/schema/planTemperatures';
 import type { UnitSystem } from '@/features/units/unitSystem';
 import { displayUnit } from '@/features/units/quantityUnits';
 import { QuantityField } from '@/features/part/QuantityField';
@@ -24,7 +24,7 @@ export function HeatTransferEditor({ heatTransfer, boilingCurve, system, onChang
   const positive = (v: number) => (v > 0 ? null : 'must be greater than zero');
   const toTable = (): HeatTransfer =>
     boilingCurve
-      ? { kind: 'surface-table', rows: boilingCurve.hWPerM2KBySurfaceC.map(([c, h]) => [Number((c + KELVIN_OFFSET).toPrecision(12)), h]) }
+      ? { kind: 'surface-table', rows: boilingCurve.hWPerM2KBySurfaceC.map(([c, h]) => [celsiusToKelvin(c), h]) }
       : { kind: 'surface-table', rows: [[TABLE_START_K, (heatTransfer as { hWPerM2K: number }).hWPerM2K], [TABLE_END_K, (heatTransfer as { hWPerM2K: number }).hWPerM2K]] };
   return (
     <div className="subgroup">
