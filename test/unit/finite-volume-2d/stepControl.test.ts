@@ -15,7 +15,7 @@ import { surfaceBoundary } from '@/engine/properties/surfaceBoundary';
 import { parsePlan } from '@/schema/parsePlan';
 import type { StageProblem, StageSolution } from '@/engine/methods/stageProblem';
 import type { PointId, Shape } from '@/schema/planSchema';
-import { solved } from './finiteShapeFixture';
+import { largestSampleDifference as largest, solved } from './finiteShapeFixture';
 
 /** Guard against a stuck run on a loaded machine (the tight runs take several seconds); not a speed check. */
 const SLOW_CASE_TIMEOUT_MS = 120_000;
@@ -56,21 +56,6 @@ function quench(shape: Shape, end: StageProblem['end'], toleranceK: number, solv
   return solved(
     solver({ geometry: geometryOf(shape), material: materialModel(part.material), boundary: surfaceBoundary(water), start: { kind: 'uniform', temperatureK: START_K }, end, toleranceK, sampleCount: SAMPLE_COUNT, propertyTemperatureK: 800 }),
   );
-}
-
-function largest(a: StageSolution, b: StageSolution, id: PointId): { differenceK: number; where: string } {
-  const x = a.samples.temperaturesK[id]!;
-  const y = b.samples.temperaturesK[id]!;
-  let differenceK = 0;
-  let where = '';
-  for (let i = 0; i < x.length; i++) {
-    const d = Math.abs(x[i] - y[i]);
-    if (d > differenceK) {
-      differenceK = d;
-      where = `t = ${a.samples.timeS[i].toFixed(2)} s: ${x[i].toFixed(3)} K vs ${y[i].toFixed(3)} K`;
-    }
-  }
-  return { differenceK, where };
 }
 
 const shapes: [string, Shape][] = [

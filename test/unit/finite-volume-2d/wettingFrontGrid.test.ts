@@ -13,7 +13,7 @@ import { surfaceBoundary } from '@/engine/properties/surfaceBoundary';
 import { parsePlan } from '@/schema/parsePlan';
 import type { StageProblem, StageSolver } from '@/engine/methods/stageProblem';
 import type { PointId } from '@/schema/planSchema';
-import { solved } from './finiteShapeFixture';
+import { largestSampleDifference, solved } from './finiteShapeFixture';
 
 /** Guard against a stuck run on a loaded machine (the reference takes several seconds); not a speed check. */
 const SLOW_CASE_TIMEOUT_MS = 120_000;
@@ -53,17 +53,7 @@ describe('grid error through a wetting front (hub water quench)', () => {
     const coarse = quench(solveFiniteVolume2DStage);
     const fine = quench(finiteVolume2DSolver({ nodesPerAxis: REFERENCE_NODES_PER_AXIS }));
     for (const [id, boundK] of Object.entries(GRID_ERROR_K) as [PointId, number][]) {
-      const x = coarse.samples.temperaturesK[id]!;
-      const y = fine.samples.temperaturesK[id]!;
-      let differenceK = 0;
-      let where = '';
-      for (let i = 0; i < x.length; i++) {
-        const d = Math.abs(x[i] - y[i]);
-        if (d > differenceK) {
-          differenceK = d;
-          where = `t = ${coarse.samples.timeS[i].toFixed(2)} s: ${x[i].toFixed(3)} K vs ${y[i].toFixed(3)} K`;
-        }
-      }
+      const { differenceK, where } = largestSampleDifference(coarse, fine, id);
       expect(differenceK, `${id}: 40 x 40 vs ${REFERENCE_NODES_PER_AXIS - 1} x ${REFERENCE_NODES_PER_AXIS - 1} cells over ${STAGE_S} s from ${START_K} K, largest ${differenceK.toFixed(3)} K (${where}), bound ${boundK} K`).toBeLessThan(boundK);
     }
   });
