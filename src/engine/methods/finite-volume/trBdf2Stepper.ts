@@ -21,6 +21,7 @@ import type { VolumeGrid } from './buildVolumeGrid';
 import type { MaterialTable } from './tabulateMaterial';
 
 const GAMMA = 2 - Math.SQRT2;
+const INV_GAMMA = 1 / GAMMA;
 const D = GAMMA / 2;
 const W = Math.SQRT2 / 4;
 // bhat - b for the three stages: ((1 - 4w)/3, 1/3, -2d/3); they sum to zero.
@@ -68,6 +69,11 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
   let lastStepS = 0;
   // The state before the accepted one and the step between them, for the stage predictor.
   const tPrev = arr();
+  /** dT/dt = F / (V C) of the accepted state, for the predictors (set with the state). */
+  const rate0 = arr();
+  const setRate0 = () => {
+    for (let i = 0; i < n; i++) rate0[i] = (f0[i] * invVol[i]) / c0[i];
+  };
   let prevStepS = 0;
   const maxNewtonMoveK = Math.max(highK - lowK, 1);
   // One interval means constant properties: e is linear in T and no capacity peak can be stepped over.
@@ -234,6 +240,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       prevStepS = 0;
       q0 = evaluate(t0, f0, c0, e0, 0, false, false, 0);
       for (let i = 0; i < n; i++) if (!Number.isFinite(f0[i])) return false;
+      setRate0();
       return Number.isFinite(q0);
     },
     attempt(h) {
@@ -244,12 +251,13 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       // as the Newton starting value: Hairer and Wanner, Solving ODEs II, 2nd ed., Sec. IV.8 (from memory).
       const tau = GAMMA * h;
       const history = prevStepS > 0;
+      const invPrev2 = history ? 1 / (prevStepS * prevStepS) : 0;
       for (let i = 0; i < n; i++) {
         explicit[i] = vol[i] * e0[i] + a * f0[i];
         let guess = t0[i];
         if (history) {
-          const slope = (f0[i] * invVol[i]) / c0[i];
-          const curvature = (tPrev[i] - t0[i] + slope * prevStepS) / (prevStepS * prevStepS);
+          const slope = rate0[i];
+          const curvature = (tPrev[i] - t0[i] + slope * prevStepS) * invPrev2;
           guess = t0[i] + tau * (slope + curvature * tau);
         }
         tg[i] = guess < lowK ? lowK : guess > highK ? highK : guess;
@@ -257,16 +265,17 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       const qgNew = solveStage(tg, fg, cg, eg, a);
       if (qgNew === null) return { ok: false, reason: 'newton' };
       // Stage 2, BDF2 to t + h: V e_1 - d h F_1 = V e_0 + w h (F_0 + F_g).
+      const wh = W * h, invTau2 = 1 / (tau * tau);
       for (let i = 0; i < n; i++) {
-        explicit[i] = vol[i] * e0[i] + W * h * (f0[i] + fg[i]);
+        explicit[i] = vol[i] * e0[i] + wh * (f0[i] + fg[i]);
         // Predictor: the quadratic with the value and slope at t through the first stage (the secant on the
         // first step from a state, where the slope at t can be that of a sudden start).
         let guess: number;
         if (history) {
-          const slope = (f0[i] * invVol[i]) / c0[i];
-          const curvature = (tg[i] - t0[i] - slope * tau) / (tau * tau);
+          const slope = rate0[i];
+          const curvature = (tg[i] - t0[i] - slope * tau) * invTau2;
           guess = t0[i] + h * (slope + curvature * h);
-        } else guess = t0[i] + (tg[i] - t0[i]) / GAMMA;
+        } else guess = t0[i] + (tg[i] - t0[i]) * INV_GAMMA;
         t1[i] = guess < lowK ? lowK : guess > highK ? highK : guess;
       }
       const q1New = solveStage(t1, f1, c1, e1, a);
@@ -297,6 +306,7 @@ export function createTrBdf2Stepper(grid: VolumeGrid, table: MaterialTable, boun
       [c0, c1] = [c1, c0];
       [e0, e1] = [e1, e0];
       q0 = q1;
+      setRate0();
     },
   };
   return stepper;
