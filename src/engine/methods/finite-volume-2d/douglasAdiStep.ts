@@ -38,8 +38,11 @@ export interface AdiStepResult {
 }
 
 export interface DouglasAdiStepper {
-  /** Advances u by dtS seconds into out (u is not changed). */
-  step(u: Float64Array, dtS: number, out: Float64Array): AdiStepResult;
+  /**
+   * Advances u by dtS seconds into out (u is not changed), the Picard iteration starting from firstIterate when given
+   * (else from u plus the last converged step's rate of change times dtS).
+   */
+  step(u: Float64Array, dtS: number, out: Float64Array, firstIterate?: Float64Array): AdiStepResult;
   /** du/dt of the semi-discrete equations at the field u, K/s, into out: the slopes for cubic Hermite sampling. */
   rate(u: Float64Array, out: Float64Array): void;
 }
@@ -167,10 +170,11 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
       for (const p of surfaceNodes) out[p] -= cooledAreaM2[p] * boundary.fluxOut(u[p]);
       for (let p = 0; p < size; p++) out[p] /= volumeM3[p] * c0[p];
     },
-    step(u, dtS, out) {
+    step(u, dtS, out, firstIterate) {
       lookUpStart(u);
       const perDt = 1 / dtS;
-      for (let p = 0; p < size; p++) uStar[p] = u[p] + rateKPerS[p] * dtS;
+      if (firstIterate) uStar.set(firstIterate);
+      else for (let p = 0; p < size; p++) uStar[p] = u[p] + rateKPerS[p] * dtS;
       if (constantProperties) {
         k.set(k0);
         for (let p = 0; p < size; p++) capPerDt[p] = volumeM3[p] * c0[p] * perDt;

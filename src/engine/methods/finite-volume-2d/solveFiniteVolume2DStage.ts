@@ -193,6 +193,9 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   let back1S = 0;
   let back2S = 0;
   let known = 0;
+  // The quadratic through u, earlier1 and earlier2 at the trial's end, and the share of its miss that is the step's own error.
+  const guess = new Float64Array(grid.size);
+  let ownErrorShare = 0;
   // Below the default tolerance the grid is refined and the steps follow it through the change limit only: the time
   // error at the default tolerance is already far below the grid's where the two differ most (a wetting front).
   const localToleranceK = options.localErrorK ?? LOCAL_ERROR_SHARE * Math.max(problem.toleranceK, DEFAULT_GRID_TOLERANCE_K);
@@ -222,14 +225,16 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
     // A step that would leave a sliver before the end is stretched to the end.
     const lastS = durationS - timeS;
     const tryS = lastS < (1 + LAST_STEP_STRETCH) * dtS ? lastS : dtS;
-    let result = stepper.step(u, tryS, next);
+    // The first Picard iterate: the quadratic through the last three fields, extrapolated to the trial's end.
+    if (known >= 2) extrapolate(tryS);
+    let result = stepper.step(u, tryS, next, known >= 2 ? guess : undefined);
     if (!result.converged && tryS > MIN_STEP_S) {
       dtS = tryS / 2;
       continue;
     }
     // Step ratios, each measure over its limit and scaled to act linearly on the step: 1 is on the limit.
     let ratio = result.maxChangeK / stepTargetK;
-    if (known >= 2) ratio = Math.max(ratio, Math.cbrt(localErrorK(tryS) / localToleranceK));
+    if (known >= 2) ratio = Math.max(ratio, Math.cbrt(localErrorK() / localToleranceK));
     ratio = Math.max(ratio, largestRelativeHChange() / H_CHANGE_MAX);
     if (ratio > 1 && tryS > MIN_STEP_S) {
       dtS = tryS * Math.max(STEP_SHRINK_MIN, STEP_SAFETY / ratio);
@@ -311,24 +316,29 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
    * Milne's device on the trial step (Lambert, Numerical Methods for Ordinary Differential Systems, 1991, Sec. 4.5
    * (from memory)): the quadratic through the last three accepted fields, extrapolated by h, misses the exact value by
    * h (h + b1) (h + b1 + b2) u''' / 6 (the interpolation remainder); the Crank-Nicolson step by h³ u''' / 12 (Lambert,
-   * Sec. 3.5 (from memory)). Their difference gives the step's own error at every node; the largest is returned, K.
+   * Sec. 3.5 (from memory)). extrapolate(h) puts the quadratic into guess; localErrorK() returns the largest of the
+   * step's own errors at the nodes, K, from the difference of the two.
    */
-  function localErrorK(h: number): number {
+  function extrapolate(h: number): void {
     const t1 = -back1S;
     const t2 = -back1S - back2S;
     // Lagrange weights at h of the nodes 0 (u), t1 (earlier1), t2 (earlier2).
     const w0 = ((h - t1) * (h - t2)) / (t1 * t2);
     const w1 = (h * (h - t2)) / (t1 * (t1 - t2));
     const w2 = (h * (h - t1)) / (t2 * (t2 - t1));
+    for (let p = 0; p < grid.size; p++) guess[p] = w0 * u[p] + w1 * earlier1[p] + w2 * earlier2[p];
     const remainder = (h * (h - t1) * (h - t2)) / 6;
     const own = (h * h * h) / 12;
-    const share = own / (own + remainder);
+    ownErrorShare = own / (own + remainder);
+  }
+
+  function localErrorK(): number {
     let largest = 0;
     for (let p = 0; p < grid.size; p++) {
-      const d = Math.abs(next[p] - (w0 * u[p] + w1 * earlier1[p] + w2 * earlier2[p]));
+      const d = Math.abs(next[p] - guess[p]);
       if (d > largest && !crossesKink(p)) largest = d;
     }
-    return share * largest;
+    return ownErrorShare * largest;
   }
 
   /**
