@@ -9,7 +9,8 @@
 // left out), is below LOCAL_ERROR_SHARE x toleranceK (toleranceK no less than the default grid's), (2) the surface h
 // changes by at most H_CHANGE_MAX relative, (3) no node changes by more than twice STEP_TARGET_CHANGE_K / refinement
 // and (4) the Picard iteration converged; otherwise it is shortened (Hairer, Norsett and Wanner's controller, cube
-// root of the error ratio). Every accepted step is recorded with each point's value and its rate from the semi-discrete
+// root of the error ratio). The Picard iteration starts from that quadratic, extrapolated to the trial's end (2.03
+// iterations per trial on the oil benchmark; 2.20 from the last step's rate). Every accepted step is recorded with each point's value and its rate from the semi-discrete
 // equations; samples are cubic Hermite between steps (resampleHermite), so duration and point-temperature ends
 // take the same steps and give the same samples. Point-temperature ends are located inside the step by Brent's
 // method on the step length (numerics/findRootBracketed).
@@ -18,7 +19,7 @@
 // grid-refinement check, and down to half as fine for the workbench's quick pass at 0.1 K. Nodes are clustered towards the faces by DEFAULT_STRETCH
 // (Vinokur's sinh stretching; face spacing 0.7 of the even spacing).
 // Expected error: second order in space and time (test/unit/finite-volume-2d); the time part at toleranceK 0.01 K
-// is 0.35-0.41 K at the faces and 0.02 K at the centre through a water boiling curve (stepControl.test), 0.1-0.2 K
+// is 0.32-0.43 K at the faces and 0.02 K at the centre through a water boiling curve (stepControl.test), 0.1-0.2 K
 // at the faces in the oil benchmark (it adds up over long smooth stretches: the bound is per step). Against the exact product solution
 // on the default grids (40 x 40 cells in 2-D, 20³ in 3-D), 25-40 mm parts from 850 °C: about 0.05 K (2-D) and
 // 0.28 K (3-D corner) in oil, 0.34 K in the first second of a water quench, less in air; through transition boiling
@@ -27,6 +28,9 @@
 // 0.01 K: the runner's cross-check reports the difference.
 // Energy: heat through the faces equals the change of enthalpy to rounding for constant properties and to about
 // 1e-8 relative with tables (the Picard stop), reported as energyRelativeError.
+// Speed (test/bench/finiteVolume2D.bench.ts, 40 x 40 oil stage): 506 steps, 613 trials, 1243 Picard iterations; the
+// trials are set by the local-error rule and each needs two iterations (one to converge, one to show it), so the cost
+// per iteration sets the time (docs/methods/product-solutions.md, Sec. 4, has the figures and what was tried).
 import type { StageOutcome, StageProblem, StageSolver } from '../stageProblem';
 import type { PointId } from '@/schema/planSchema';
 import type { TensorGridField } from '../../fields';
@@ -60,7 +64,8 @@ const STEP_TARGET_CHANGE_K = 10;
  * Share of toleranceK given to the estimated local error of one step. A rule of this solver, set from measurement:
  * a tenth (common practice) held the hub water quench's time error to 0.05 K but took 3795 steps, and the runner's
  * refined cross-check three times that; a half gave 0.15-0.37 K at the faces in 1055 steps on the beta 2 grid, but
- * 0.55 K on the beta 1.5 grid (measured); 0.4 gives 0.35-0.41 K in 1090 steps (stepControl.test).
+ * 0.55 K on the beta 1.5 grid (measured); 0.4 gives 0.35-0.41 K in 1090 steps (stepControl.test; 0.32-0.43 K in 1078
+ * steps since the Picard iteration starts from the quadratic extrapolation).
  */
 const LOCAL_ERROR_SHARE = 0.4;
 /** Largest relative change of the surface h over one step: the steep rows of a boiling curve are crossed in several steps. A rule of this solver. */
