@@ -71,7 +71,6 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
   const startField = new Float64Array(size);
   let startKnown = false;
   const kStar = new Float64Array(size);
-  const scratch = new Float64Array(size);
   const cStar = new Float64Array(size);
   const eStar = new Float64Array(size);
   const capPerDt = new Float64Array(size);
@@ -89,7 +88,7 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
       for (let p = 0; p < size && same; p++) same = u[p] === startField[p];
       if (same) return;
     }
-    evaluateMaterial(table, u, size, k0, scratch, c0, e0);
+    evaluateMaterial(table, u, size, k0, c0, e0);
     startField.set(u);
     startKnown = true;
   };
@@ -185,7 +184,7 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
       while (iterations < PICARD_MAX_ITERATIONS) {
         iterations++;
         if (!constantProperties) {
-          evaluateMaterial(table, uStar, size, kStar, scratch, cStar, eStar);
+          evaluateMaterial(table, uStar, size, kStar, cStar, eStar);
           for (let p = 0; p < size; p++) {
             // k over the step by the trapezoid rule (second order, like the Crank-Nicolson base).
             k[p] = 0.5 * (k0[p] + kStar[p]);

@@ -311,8 +311,8 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
 
   function storedEnergy(temperaturesK: Float64Array): number {
     const n = temperaturesK.length;
-    const k = new Float64Array(n), dk = new Float64Array(n), c = new Float64Array(n), e = new Float64Array(n);
-    evaluateMaterial(table, temperaturesK, n, k, dk, c, e);
+    const k = new Float64Array(n), c = new Float64Array(n), e = new Float64Array(n);
+    evaluateMaterial(table, temperaturesK, n, k, c, e);
     let sum = 0;
     for (let p = 0; p < n; p++) sum += grid.volumeM3[p] * e[p];
     return sum;
