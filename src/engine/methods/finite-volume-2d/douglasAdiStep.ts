@@ -60,7 +60,7 @@ export function douglasAdiStepper(grid: FiniteGrid, table: MaterialTable, consta
     if (cooledAreaM2[p] > 0) surfaceNodes.push(p);
   }
   const uStar = new Float64Array(size);
-  // Predictor for the first iterate: the last converged step's rate of change (none at first).
+  // First iterate when the caller gives none: u plus the last converged step's rate of change (none at first) times the step.
   const rateKPerS = new Float64Array(size);
   const k = new Float64Array(size);
   // k, C and e at the start of the step, and the field they were looked up at (a step and its retries, and the
