@@ -9,7 +9,8 @@
 // left out), is below LOCAL_ERROR_SHARE x toleranceK (toleranceK no less than the default grid's), (2) the surface h
 // changes by at most H_CHANGE_MAX relative, (3) no node changes by more than twice STEP_TARGET_CHANGE_K / refinement
 // and (4) the Picard iteration converged; otherwise it is shortened (Hairer, Norsett and Wanner's controller, cube
-// root of the error ratio). Every accepted step is recorded with each point's value and its rate from the semi-discrete
+// root of the error ratio). The Picard iteration starts from that quadratic, extrapolated to the trial's end (2.03
+// iterations per trial on the oil benchmark; 2.20 from the last step's rate). Every accepted step is recorded with each point's value and its rate from the semi-discrete
 // equations; samples are cubic Hermite between steps (resampleHermite), so duration and point-temperature ends
 // take the same steps and give the same samples. Point-temperature ends are located inside the step by Brent's
 // method on the step length (numerics/findRootBracketed).
@@ -18,7 +19,7 @@
 // grid-refinement check, and down to half as fine for the workbench's quick pass at 0.1 K. Nodes are clustered towards the faces by DEFAULT_STRETCH
 // (Vinokur's sinh stretching; face spacing 0.7 of the even spacing).
 // Expected error: second order in space and time (test/unit/finite-volume-2d); the time part at toleranceK 0.01 K
-// is 0.35-0.41 K at the faces and 0.02 K at the centre through a water boiling curve (stepControl.test), 0.1-0.2 K
+// is 0.32-0.43 K at the faces and 0.02 K at the centre through a water boiling curve (stepControl.test), 0.1-0.2 K
 // at the faces in the oil benchmark (it adds up over long smooth stretches: the bound is per step). Against the exact product solution
 // on the default grids (40 x 40 cells in 2-D, 20³ in 3-D), 25-40 mm parts from 850 °C: about 0.05 K (2-D) and
 // 0.28 K (3-D corner) in oil, 0.34 K in the first second of a water quench, less in air; through transition boiling
@@ -27,6 +28,9 @@
 // 0.01 K: the runner's cross-check reports the difference.
 // Energy: heat through the faces equals the change of enthalpy to rounding for constant properties and to about
 // 1e-8 relative with tables (the Picard stop), reported as energyRelativeError.
+// Speed (test/bench/finiteVolume2D.bench.ts, 40 x 40 oil stage): 506 steps, 613 trials, 1243 Picard iterations; the
+// trials are set by the local-error rule and each needs two iterations (one to converge, one to show it), so the cost
+// per iteration sets the time (docs/methods/product-solutions.md, Sec. 4, has the figures and what was tried).
 import type { StageOutcome, StageProblem, StageSolver } from '../stageProblem';
 import type { PointId } from '@/schema/planSchema';
 import type { TensorGridField } from '../../fields';
@@ -60,7 +64,8 @@ const STEP_TARGET_CHANGE_K = 10;
  * Share of toleranceK given to the estimated local error of one step. A rule of this solver, set from measurement:
  * a tenth (common practice) held the hub water quench's time error to 0.05 K but took 3795 steps, and the runner's
  * refined cross-check three times that; a half gave 0.15-0.37 K at the faces in 1055 steps on the beta 2 grid, but
- * 0.55 K on the beta 1.5 grid (measured); 0.4 gives 0.35-0.41 K in 1090 steps (stepControl.test).
+ * 0.55 K on the beta 1.5 grid (measured); 0.4 gives 0.35-0.41 K in 1090 steps (stepControl.test; 0.32-0.43 K in 1078
+ * steps since the Picard iteration starts from the quadratic extrapolation).
  */
 const LOCAL_ERROR_SHARE = 0.4;
 /** Largest relative change of the surface h over one step: the steep rows of a boiling curve are crossed in several steps. A rule of this solver. */
@@ -193,6 +198,9 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
   let back1S = 0;
   let back2S = 0;
   let known = 0;
+  // The quadratic through u, earlier1 and earlier2 at the trial's end, and the share of its miss that is the step's own error.
+  const guess = new Float64Array(grid.size);
+  let ownErrorShare = 0;
   // Below the default tolerance the grid is refined and the steps follow it through the change limit only: the time
   // error at the default tolerance is already far below the grid's where the two differ most (a wetting front).
   const localToleranceK = options.localErrorK ?? LOCAL_ERROR_SHARE * Math.max(problem.toleranceK, DEFAULT_GRID_TOLERANCE_K);
@@ -222,14 +230,16 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
     // A step that would leave a sliver before the end is stretched to the end.
     const lastS = durationS - timeS;
     const tryS = lastS < (1 + LAST_STEP_STRETCH) * dtS ? lastS : dtS;
-    let result = stepper.step(u, tryS, next);
+    // The first Picard iterate: the quadratic through the last three fields, extrapolated to the trial's end.
+    if (known >= 2) extrapolate(tryS);
+    let result = stepper.step(u, tryS, next, known >= 2 ? guess : undefined);
     if (!result.converged && tryS > MIN_STEP_S) {
       dtS = tryS / 2;
       continue;
     }
     // Step ratios, each measure over its limit and scaled to act linearly on the step: 1 is on the limit.
     let ratio = result.maxChangeK / stepTargetK;
-    if (known >= 2) ratio = Math.max(ratio, Math.cbrt(localErrorK(tryS) / localToleranceK));
+    if (known >= 2) ratio = Math.max(ratio, Math.cbrt(localErrorK() / localToleranceK));
     ratio = Math.max(ratio, largestRelativeHChange() / H_CHANGE_MAX);
     if (ratio > 1 && tryS > MIN_STEP_S) {
       dtS = tryS * Math.max(STEP_SHRINK_MIN, STEP_SAFETY / ratio);
@@ -301,8 +311,8 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
 
   function storedEnergy(temperaturesK: Float64Array): number {
     const n = temperaturesK.length;
-    const k = new Float64Array(n), dk = new Float64Array(n), c = new Float64Array(n), e = new Float64Array(n);
-    evaluateMaterial(table, temperaturesK, n, k, dk, c, e);
+    const k = new Float64Array(n), c = new Float64Array(n), e = new Float64Array(n);
+    evaluateMaterial(table, temperaturesK, n, k, c, e);
     let sum = 0;
     for (let p = 0; p < n; p++) sum += grid.volumeM3[p] * e[p];
     return sum;
@@ -311,24 +321,29 @@ function solveOnGrid(problem: StageProblem, options: FiniteVolume2DOptions): Sta
    * Milne's device on the trial step (Lambert, Numerical Methods for Ordinary Differential Systems, 1991, Sec. 4.5
    * (from memory)): the quadratic through the last three accepted fields, extrapolated by h, misses the exact value by
    * h (h + b1) (h + b1 + b2) u''' / 6 (the interpolation remainder); the Crank-Nicolson step by h³ u''' / 12 (Lambert,
-   * Sec. 3.5 (from memory)). Their difference gives the step's own error at every node; the largest is returned, K.
+   * Sec. 3.5 (from memory)). extrapolate(h) puts the quadratic into guess; localErrorK() returns the largest of the
+   * step's own errors at the nodes, K, from the difference of the two.
    */
-  function localErrorK(h: number): number {
+  function extrapolate(h: number): void {
     const t1 = -back1S;
     const t2 = -back1S - back2S;
     // Lagrange weights at h of the nodes 0 (u), t1 (earlier1), t2 (earlier2).
     const w0 = ((h - t1) * (h - t2)) / (t1 * t2);
     const w1 = (h * (h - t2)) / (t1 * (t1 - t2));
     const w2 = (h * (h - t1)) / (t2 * (t2 - t1));
+    for (let p = 0; p < grid.size; p++) guess[p] = w0 * u[p] + w1 * earlier1[p] + w2 * earlier2[p];
     const remainder = (h * (h - t1) * (h - t2)) / 6;
     const own = (h * h * h) / 12;
-    const share = own / (own + remainder);
+    ownErrorShare = own / (own + remainder);
+  }
+
+  function localErrorK(): number {
     let largest = 0;
     for (let p = 0; p < grid.size; p++) {
-      const d = Math.abs(next[p] - (w0 * u[p] + w1 * earlier1[p] + w2 * earlier2[p]));
+      const d = Math.abs(next[p] - guess[p]);
       if (d > largest && !crossesKink(p)) largest = d;
     }
-    return share * largest;
+    return ownErrorShare * largest;
   }
 
   /**

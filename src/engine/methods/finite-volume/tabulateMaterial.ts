@@ -50,14 +50,13 @@ export function tabulateMaterial(material: MaterialModel, lowK: number, highK: n
 }
 
 /**
- * Evaluates k, dk/dT, C and e at `count` temperatures into the given arrays (no allocation).
+ * Evaluates k, C and e at `count` temperatures into the given arrays (no allocation).
  */
 export function evaluateMaterial(
   table: MaterialTable,
   temperaturesK: Float64Array,
   count: number,
   k: Float64Array,
-  dkdT: Float64Array,
   c: Float64Array,
   e: Float64Array,
 ): void {
@@ -68,12 +67,10 @@ export function evaluateMaterial(
     const t = temperaturesK[i];
     if (t <= lowK) {
       k[i] = kt[0];
-      dkdT[i] = 0;
       c[i] = ct[0];
       e[i] = ct[0] * (t - lowK);
     } else if (t >= highK) {
       k[i] = kt[intervals];
-      dkdT[i] = 0;
       c[i] = ct[intervals];
       e[i] = et[intervals] + ct[intervals] * (t - highK);
     } else {
@@ -83,7 +80,6 @@ export function evaluateMaterial(
       const slopeK = (kt[j + 1] - kt[j]) * inv;
       const slopeC = (ct[j + 1] - ct[j]) * inv;
       k[i] = kt[j] + slopeK * s;
-      dkdT[i] = slopeK;
       c[i] = ct[j] + slopeC * s;
       // e = e_j + C_j s + slope s²/2: the exact integral of the linear C on the interval.
       e[i] = et[j] + s * (ct[j] + 0.5 * slopeC * s);
