@@ -124,7 +124,12 @@ export const VALIDITY_RULES: ValidityRule[] = [
     rule: 'Every stage is computed a second way; the two should agree within the method’s stated accuracy.',
     trips: (f) => f.crossCheck !== null && f.crossCheck.maxDifferenceK > f.crossCheck.allowedK,
     message: (f) => `The ${f.method} result and its cross-check (${f.crossCheck!.refined ? `${f.crossCheck!.method} re-run at a tenth of the tolerance` : f.crossCheck!.method}) differ by up to ${fmt(f.crossCheck!.maxDifferenceK)} K (allowed ${fmt(f.crossCheck!.allowedK)} K).`,
-    advice: (f) => (f.method === 'lumped' ? 'The part is not at one temperature here: use the finite-volume method.' : 'Tighten the tolerance or force the finite-volume method, and compare again.'),
+    advice: (f) =>
+      f.method === 'lumped'
+        ? 'The part is not at one temperature here: use the finite-volume method.'
+        : f.crossCheck!.refined
+          ? `The difference is the solver's own discretisation error at the plan tolerance, and the refined run is the closer one: read this stage's temperatures as uncertain by about ${fmt(f.crossCheck!.maxDifferenceK, 2)} K, or tighten the plan tolerance and compare again (in a boiling-curve bath, a film collapse magnifies small differences; on finite shapes the grid places the wetting front only to about this figure).`
+          : `The two methods disagree beyond their tolerances: force the ${f.crossCheck!.method} method, which is valid here, and compare again.`,
     numbers: (f) => ({ maxDifferenceK: f.crossCheck?.maxDifferenceK ?? 0, allowedK: f.crossCheck?.allowedK ?? 0 }),
   },
   {

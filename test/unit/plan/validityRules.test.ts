@@ -45,6 +45,14 @@ describe('validity rules', () => {
     expect(ids({ crossCheck: { method: 'finite-volume', refined: false, maxDifferenceK: 0.5, allowedK: 0.02 } })).toContain('cross-check-difference');
   });
 
+  it('advise by the kind of cross-check: a refined re-run gives the uncertainty, a second method says which to force', () => {
+    const advice = (f: Partial<StageFacts>) => stageWarnings({ ...quiet, ...f }).find((w) => w.ruleId === 'cross-check-difference')!.advice;
+    const refined = advice({ method: 'finite-volume', constantProperties: false, crossCheck: { method: 'finite-volume', refined: true, maxDifferenceK: 10.6, allowedK: 0.02 } });
+    expect(refined).toMatch(/uncertain by about 11 K/);
+    expect(refined).not.toMatch(/force/);
+    expect(advice({ crossCheck: { method: 'finite-volume', refined: false, maxDifferenceK: 0.5, allowedK: 0.02 } })).toMatch(/force the finite-volume method/);
+  });
+
   it('flag the one-term hand method below Fo = 0.2 (common practice)', () => {
     expect(ids({ fourierEnd: 0.1 })).toContain('one-term-fourier-limit');
   });
