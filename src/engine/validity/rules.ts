@@ -128,7 +128,7 @@ export const VALIDITY_RULES: ValidityRule[] = [
       f.method === 'lumped'
         ? 'The part is not at one temperature here: use the finite-volume method.'
         : f.crossCheck!.refined
-          ? `The difference is the solver's own discretisation error at the plan tolerance, and the refined run is the closer one: read this stage's temperatures as uncertain by about ${fmt(f.crossCheck!.maxDifferenceK, 2)} K, or tighten the plan tolerance and compare again (in a boiling-curve bath, a film collapse magnifies small differences; on finite shapes the grid places the wetting front only to about this figure).`
+          ? `The difference is the solver's own discretisation error at the plan tolerance, and the refined run is the closer one: read this stage's temperatures as uncertain by about ${fmt(f.crossCheck!.maxDifferenceK, 2)} K, or tighten the plan tolerance and compare again.${f.hIsConstant ? '' : ' In a boiling-curve bath a film collapse magnifies small differences, and on finite shapes the grid places the wetting front only to about this figure.'}`
           : `The two methods disagree beyond their tolerances: force the ${f.crossCheck!.method} method, which is valid here, and compare again.`,
     numbers: (f) => ({ maxDifferenceK: f.crossCheck?.maxDifferenceK ?? 0, allowedK: f.crossCheck?.allowedK ?? 0 }),
   },

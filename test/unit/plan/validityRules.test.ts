@@ -49,7 +49,8 @@ describe('validity rules', () => {
     const advice = (f: Partial<StageFacts>) => stageWarnings({ ...quiet, ...f }).find((w) => w.ruleId === 'cross-check-difference')!.advice;
     const refined = advice({ method: 'finite-volume', constantProperties: false, crossCheck: { method: 'finite-volume', refined: true, maxDifferenceK: 10.6, allowedK: 0.02 } });
     expect(refined).toMatch(/uncertain by about 11 K/);
-    expect(refined).not.toMatch(/force/);
+    expect(refined).not.toMatch(/force|boiling/);
+    expect(advice({ method: 'finite-volume', hIsConstant: false, crossCheck: { method: 'finite-volume', refined: true, maxDifferenceK: 10.6, allowedK: 0.02 } })).toMatch(/film collapse/);
     expect(advice({ crossCheck: { method: 'finite-volume', refined: false, maxDifferenceK: 0.5, allowedK: 0.02 } })).toMatch(/force the finite-volume method/);
   });
 
