@@ -10,6 +10,7 @@ import type { WorkerLike } from '@/worker/createWorkerLane';
 import { SAVED_DOCUMENT_KEY } from '@/state/savedWorkbench';
 import { CHECK_DELAY_MS } from '@/worker/createEngineClient';
 import { quenchedShaftResult } from './fixtures/quenchedShaftResult';
+import { MemoryStorage } from '../unit/state/memoryStorage';
 
 const plotly = vi.hoisted(() => ({ react: vi.fn(() => Promise.resolve()), purge: vi.fn() }));
 vi.mock('plotly-impl', () => ({ default: plotly }));
@@ -19,16 +20,6 @@ vi.setConfig({ testTimeout: 30_000 });
 
 const { App } = await import('@/app/App');
 const { startWorkbench } = await import('@/app/startWorkbench');
-
-class MemoryStorage {
-  items = new Map<string, string>();
-  getItem(k: string) {
-    return this.items.get(k) ?? null;
-  }
-  setItem(k: string, v: string) {
-    this.items.set(k, v);
-  }
-}
 
 /** Answers a run in a microtask unless told to hold it (to test Stop). */
 class FakeWorker implements WorkerLike {

@@ -11,6 +11,7 @@ import { geometryOf } from '@/engine/geometry/geometry';
 import type { Material, Medium, Shape } from '@/schema/planSchema';
 import type { Field } from '@/engine/fields';
 import { boilingBath, finiteProblem, flatBar, radiatingAir, shortCylinder, smallBlock, solved, START_K, variableAlloy } from './finiteShapeFixture';
+import { adaptiveSimpson } from '../finite-volume/adaptiveSimpson';
 
 /** Guard against a stuck run on a loaded machine (the 3-D cases take about a second); not a speed check. */
 const SLOW_CASE_TIMEOUT_MS = 60_000;
@@ -19,15 +20,6 @@ const BALANCE_TOLERANCE = 1e-6;
 /** The solver resamples the tables every 0.5 K or finer (tabulateMaterial); against exact Simpson this is the allowance. */
 const INDEPENDENT_TOLERANCE = 1e-4;
 const REFERENCE_K = 300;
-
-function adaptiveSimpson(f: (x: number) => number, a: number, b: number, tol: number, depth = 0): number {
-  const c = 0.5 * (a + b);
-  const whole = ((b - a) / 6) * (f(a) + 4 * f(c) + f(b));
-  const left = ((c - a) / 6) * (f(a) + 4 * f(0.5 * (a + c)) + f(c));
-  const right = ((b - c) / 6) * (f(c) + 4 * f(0.5 * (c + b)) + f(b));
-  if (depth > 40 || Math.abs(left + right - whole) < 15 * tol) return left + right;
-  return adaptiveSimpson(f, a, c, tol / 2, depth + 1) + adaptiveSimpson(f, c, b, tol / 2, depth + 1);
-}
 
 /** Stored energy (J, on the geometry's basis) of a grid field relative to REFERENCE_K. */
 function storedEnergy(material: Material, shape: Shape, field: Field): number {

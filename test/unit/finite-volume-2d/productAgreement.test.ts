@@ -8,7 +8,8 @@ import { finiteVolume2DSolver, solveFiniteVolume2DStage } from '@/engine/methods
 import { solveProductStage } from '@/engine/methods/product/solveProductStage';
 import type { Field } from '@/engine/fields';
 import type { Medium, Shape } from '@/schema/planSchema';
-import { convection, finiteProblem, flatBar, largestDifference, shortCylinder, smallBlock, solved } from './finiteShapeFixture';
+import { convection, finiteProblem, flatBar, shortCylinder, smallBlock, solved } from './finiteShapeFixture';
+import { largestDifference } from '../largestSampleDifference';
 
 /** Guard against a stuck run on a loaded machine (the 3-D cases take about a second); not a speed check. */
 const SLOW_CASE_TIMEOUT_MS = 60_000;

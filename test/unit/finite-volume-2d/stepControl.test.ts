@@ -15,7 +15,8 @@ import { surfaceBoundary } from '@/engine/properties/surfaceBoundary';
 import { parsePlan } from '@/schema/parsePlan';
 import type { StageProblem, StageSolution } from '@/engine/methods/stageProblem';
 import type { PointId, Shape } from '@/schema/planSchema';
-import { largestSampleDifference as largest, solved } from './finiteShapeFixture';
+import { solved } from './finiteShapeFixture';
+import { largestSampleDifference as largest } from '../largestSampleDifference';
 
 /** Guard against a stuck run on a loaded machine (the tight runs take several seconds); not a speed check. */
 const SLOW_CASE_TIMEOUT_MS = 120_000;

@@ -13,7 +13,8 @@ import { surfaceBoundary } from '@/engine/properties/surfaceBoundary';
 import { parsePlan } from '@/schema/parsePlan';
 import type { StageProblem, StageSolver } from '@/engine/methods/stageProblem';
 import type { PointId } from '@/schema/planSchema';
-import { largestSampleDifference, solved } from './finiteShapeFixture';
+import { solved } from './finiteShapeFixture';
+import { largestSampleDifference } from '../largestSampleDifference';
 
 /** Guard against a stuck run on a loaded machine (the reference takes several seconds); not a speed check. */
 const SLOW_CASE_TIMEOUT_MS = 120_000;

@@ -8,19 +8,11 @@ import type { Field } from '@/engine/fields';
 import type { Material } from '@/schema/planSchema';
 import type { Shape1D } from './exactSeries1D';
 import { shapeOf } from './stageProblemFixture';
+import { adaptiveSimpson } from './adaptiveSimpson';
 
 const REFERENCE_K = 300;
 /** Simpson pieces per node interval (even). */
 const SUBINTERVALS = 16;
-
-function adaptiveSimpson(f: (x: number) => number, a: number, b: number, tol: number, depth = 0): number {
-  const c = 0.5 * (a + b);
-  const whole = ((b - a) / 6) * (f(a) + 4 * f(c) + f(b));
-  const left = ((c - a) / 6) * (f(a) + 4 * f(0.5 * (a + c)) + f(c));
-  const right = ((b - c) / 6) * (f(c) + 4 * f(0.5 * (c + b)) + f(b));
-  if (depth > 40 || Math.abs(left + right - whole) < 15 * tol) return left + right;
-  return adaptiveSimpson(f, a, c, tol / 2, depth + 1) + adaptiveSimpson(f, c, b, tol / 2, depth + 1);
-}
 
 /** Stored energy of a field relative to REFERENCE_K, on the geometry's basis (J per part, per m², per m). */
 export function storedEnergyOf(material: Material, shape: Shape1D, lengthM: number, field: Field): number {

@@ -6,6 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { solveFiniteVolumeStageWith } from '@/engine/methods/finite-volume/solveFiniteVolumeStage';
 import { boilingBath, problemOf, solved, variableMaterial } from './stageProblemFixture';
+import { largestSampleDifference } from '../largestSampleDifference';
 
 const TOLERANCE_K = 0.01;
 /** The plan tolerance applies to each method; the runner's cross-check allows twice it. */
@@ -27,11 +28,8 @@ describe('transition boiling', () => {
     const surface = plan.samples.temperaturesK.surface as Float64Array;
     expect(surface[surface.length - 1]).toBeLessThan(500);
     for (const point of ['centre', 'surface', 'mean'] as const) {
-      const a = plan.samples.temperaturesK[point] as Float64Array;
-      const b = reference.samples.temperaturesK[point] as Float64Array;
-      let worst = 0, at_ = 0;
-      for (let i = 0; i < a.length; i++) if (Math.abs(a[i] - b[i]) > worst) [worst, at_] = [Math.abs(a[i] - b[i]), i];
-      expect(worst, `${point}: largest difference ${worst} K at t = ${plan.samples.timeS[at_]} s (${a[at_]} K against ${b[at_]} K), allowed ${ALLOWED_K} K`).toBeLessThan(ALLOWED_K);
+      const { differenceK, where } = largestSampleDifference(plan, reference, point);
+      expect(differenceK, `${point}: largest difference ${differenceK} K at ${where}, allowed ${ALLOWED_K} K`).toBeLessThan(ALLOWED_K);
     }
   });
 });

@@ -5,16 +5,7 @@ import { parsePlan } from '@/schema/parsePlan';
 import { createAppStore } from '@/state/createAppStore';
 import { SAVED_DOCUMENT_KEY, SAVED_UNIT_SYSTEM_KEY, readSavedWorkbench } from '@/state/savedWorkbench';
 import { AUTOSAVE_DELAY_MS, startAutosave } from '@/state/startAutosave';
-
-class MemoryStorage {
-  items = new Map<string, string>();
-  getItem(k: string) {
-    return this.items.get(k) ?? null;
-  }
-  setItem(k: string, v: string) {
-    this.items.set(k, v);
-  }
-}
+import { MemoryStorage } from './memoryStorage';
 
 function demoDocument() {
   const parsed = parsePlan(demoPlan);

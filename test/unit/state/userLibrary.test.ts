@@ -8,20 +8,11 @@ import { materialEntryFromPlan, materialWordsOf } from '@/features/library-edito
 import { mediumEntryFromPlan, mediumWordsOf } from '@/features/library-editor/mediumEntryFromPlan';
 import { idFromName } from '@/features/library-editor/idFromName';
 import { SAVED_USER_LIBRARY_KEY, readUserLibrary, writeUserLibrary } from '@/state/savedUserLibrary';
+import { MemoryStorage } from './memoryStorage';
 
 const parsed = parsePlan(demoPlan);
 if (!parsed.ok) throw new Error('demo plan invalid');
 const plan = parsed.plan;
-
-class MemoryStorage {
-  items = new Map<string, string>();
-  getItem(k: string) {
-    return this.items.get(k) ?? null;
-  }
-  setItem(k: string, v: string) {
-    this.items.set(k, v);
-  }
-}
 
 function savedMaterial() {
   const words = { ...materialWordsOf(plan.part.material), id: 'shop-bar', description: 'our bar stock' };
