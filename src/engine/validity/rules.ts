@@ -28,6 +28,16 @@ export interface ValidityRule {
 }
 
 const fmt = (x: number, digits = 3) => (Math.abs(x) >= 1e4 || (Math.abs(x) < 1e-3 && x !== 0) ? x.toExponential(2) : Number(x.toPrecision(digits)).toString());
+
+/** What to do about a cross-check difference: it depends on what the stage was checked against. */
+function crossCheckAdvice(f: StageFacts): string {
+  const check = f.crossCheck!;
+  if (f.method === 'lumped') return 'The part is not at one temperature here: use the finite-volume method.';
+  if (!check.refined) return `The two methods disagree beyond their tolerances: force the ${check.method} method, which is valid here, and compare again.`;
+  const boiling = f.hIsConstant ? '' : ' In a boiling-curve bath a film collapse magnifies small differences, and on finite shapes the grid places the wetting front only to about this figure.';
+  return `The difference is the solver's own discretisation error at the plan tolerance, and the refined run is the closer one: read this stage's temperatures as uncertain by about ${fmt(check.maxDifferenceK, 2)} K, or tighten the plan tolerance and compare again.${boiling}`;
+}
+
 const degC = (k: number) => `${fmt(k - 273.15, 4)} °C`;
 const pct = (x: number) => `${fmt(100 * x, 3)}%`;
 
@@ -124,12 +134,7 @@ export const VALIDITY_RULES: ValidityRule[] = [
     rule: 'Every stage is computed a second way; the two should agree within the method’s stated accuracy.',
     trips: (f) => f.crossCheck !== null && f.crossCheck.maxDifferenceK > f.crossCheck.allowedK,
     message: (f) => `The ${f.method} result and its cross-check (${f.crossCheck!.refined ? `${f.crossCheck!.method} re-run at a tenth of the tolerance` : f.crossCheck!.method}) differ by up to ${fmt(f.crossCheck!.maxDifferenceK)} K (allowed ${fmt(f.crossCheck!.allowedK)} K).`,
-    advice: (f) =>
-      f.method === 'lumped'
-        ? 'The part is not at one temperature here: use the finite-volume method.'
-        : f.crossCheck!.refined
-          ? `The difference is the solver's own discretisation error at the plan tolerance, and the refined run is the closer one: read this stage's temperatures as uncertain by about ${fmt(f.crossCheck!.maxDifferenceK, 2)} K, or tighten the plan tolerance and compare again.${f.hIsConstant ? '' : ' In a boiling-curve bath a film collapse magnifies small differences, and on finite shapes the grid places the wetting front only to about this figure.'}`
-          : `The two methods disagree beyond their tolerances: force the ${f.crossCheck!.method} method, which is valid here, and compare again.`,
+    advice: crossCheckAdvice,
     numbers: (f) => ({ maxDifferenceK: f.crossCheck?.maxDifferenceK ?? 0, allowedK: f.crossCheck?.allowedK ?? 0 }),
   },
   {
